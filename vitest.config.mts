@@ -1,9 +1,15 @@
+import path from "node:path";
 import { defineConfig } from "vitest/config";
+import { TEST_ENV } from "./tests/test-env";
 
 // Three projects: `unit` needs nothing running; `integration` talks to the real MariaDB and
 // S3 fake started by tests/global-setup.ts; `e2e` drives Debian's chromium against a built app.
 export default defineConfig({
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // `server-only` throws outside React Server Components; tests call the Data Access Layer directly.
+    alias: { "server-only": path.resolve(import.meta.dirname, "tests/helpers/empty.ts") },
+  },
   test: {
     projects: [
       {
@@ -17,6 +23,7 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/global-setup.ts"],
+          env: TEST_ENV,
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,
@@ -29,6 +36,7 @@ export default defineConfig({
           include: ["tests/e2e/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/global-setup.ts", "tests/e2e/app-setup.ts"],
+          env: TEST_ENV,
           fileParallelism: false,
           testTimeout: 120_000,
           hookTimeout: 300_000,

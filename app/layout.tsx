@@ -1,0 +1,16 @@
+import type { Metadata } from "next";
+import { mono, sans, serif } from "@/app/fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Foldwright", template: "%s · Foldwright" },
+  description: "Files the documents of small law and accounting offices.",
+};
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={`${sans.variable} ${serif.variable} ${mono.variable}`}>
+      <body className="min-h-screen bg-paper font-sans text-ink antialiased">{children}</body>
+    </html>
+  );
+}

@@ -1,0 +1,7 @@
+import next from "eslint-config-next";
+
+const config = [
+  { ignores: [".next/**", "node_modules/**", ".data/**", "next-env.d.ts"] },
+  ...next,
+];
+export default config;

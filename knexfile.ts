@@ -1,0 +1,41 @@
+// Knex configuration keyed by environment. The app connects as the application user, which
+// holds only the per-table grants the migrations give it; migrations and seeds run as the
+// database owner (DATABASE_ADMIN_USER).
+import type { Knex } from "knex";
+import path from "node:path";
+import { env } from "./lib/env";
+
+type Role = "app" | "owner";
+
+export function knexConfig(role: Role = "app", database = env.db.name): Knex.Config {
+  return {
+    client: "mysql2",
+    connection: {
+      host: env.db.host,
+      port: env.db.port,
+      user: role === "app" ? env.db.user : env.db.adminUser,
+      password: role === "app" ? env.db.password : env.db.adminPassword,
+      database,
+      charset: "utf8mb4",
+      dateStrings: false,
+      timezone: "Z",
+      supportBigNumbers: true,
+    },
+    pool: { min: 0, max: role === "app" ? env.db.poolMax : 2 },
+    migrations: {
+      directory: path.join(env.root, "db/migrations"),
+      tableName: "knex_migrations",
+      extension: "ts",
+      loadExtensions: [".ts"],
+    },
+    seeds: { directory: path.join(env.root, "db/seeds"), loadExtensions: [".ts"] },
+  };
+}
+
+const config: Record<string, Knex.Config> = {
+  development: knexConfig("owner"),
+  test: knexConfig("owner", process.env.DATABASE_NAME ?? "foldwright_test"),
+  production: knexConfig("owner"),
+};
+
+export default config;

@@ -1,0 +1,82 @@
+// The one module that reads process.env. Every setting has a safe local default; `.env.example`
+// documents each. Outside development the session secret must be at least 32 characters.
+import path from "node:path";
+
+// Every command (npm scripts, next start, vitest) runs from the repository root.
+const root = process.cwd();
+
+function text(name: string, fallback: string): string {
+  const value = process.env[name];
+  return value === undefined || value === "" ? fallback : value;
+}
+
+function int(name: string, fallback: number): number {
+  const raw = process.env[name];
+  if (raw === undefined || raw === "") return fallback;
+  const value = Number(raw);
+  if (!Number.isInteger(value) || value < 0) {
+    throw new Error(`${name} must be a whole number, got "${raw}". Fix it in the environment and start again.`);
+  }
+  return value;
+}
+
+function bool(name: string, fallback: boolean): boolean {
+  const raw = process.env[name];
+  if (raw === undefined || raw === "") return fallback;
+  return ["1", "true", "yes", "on"].includes(raw.toLowerCase());
+}
+
+export const env = {
+  root,
+  production: process.env.NODE_ENV === "production",
+  port: int("PORT", 3000),
+  dataDir: text("FOLDWRIGHT_DATA_DIR", path.join(root, ".data")),
+  db: {
+    host: text("DATABASE_HOST", "127.0.0.1"),
+    port: int("DATABASE_PORT", 33306),
+    name: text("DATABASE_NAME", "foldwright"),
+    user: text("DATABASE_USER", "foldwright_app"),
+    password: text("DATABASE_PASSWORD", "foldwright-local-app"),
+    adminUser: text("DATABASE_ADMIN_USER", "root"),
+    adminPassword: text("DATABASE_ADMIN_PASSWORD", ""),
+    poolMax: int("DATABASE_POOL_MAX", 10),
+    /** Start a private mariadbd under .data/ when nothing answers (local machines only). */
+    startLocal: bool("DATABASE_START_LOCAL", true),
+  },
+  s3: {
+    endpoint: text("S3_ENDPOINT", "http://127.0.0.1:4568"),
+    region: text("S3_REGION", "us-east-1"),
+    bucket: text("S3_BUCKET", "foldwright-originals"),
+    accessKeyId: text("S3_ACCESS_KEY_ID", "S3RVER"),
+    secretAccessKey: text("S3_SECRET_ACCESS_KEY", "S3RVER"),
+    forcePathStyle: bool("S3_FORCE_PATH_STYLE", true),
+    startLocal: bool("S3_START_LOCAL", true),
+  },
+  session: {
+    secret: text("SESSION_SECRET", ""),
+    idleMinutes: int("SESSION_IDLE_MINUTES", 30),
+    maxHours: int("SESSION_MAX_HOURS", 12),
+    secureCookie: bool("SESSION_SECURE_COOKIE", false),
+  },
+  signIn: {
+    maxFailures: int("SIGN_IN_MAX_FAILURES", 5),
+    lockMinutes: int("SIGN_IN_LOCK_MINUTES", 15),
+    bcryptCost: int("BCRYPT_COST", 11),
+  },
+  demoPassword: text("DEMO_PASSWORD", "foldwright-demo"),
+  uploadMaxBytes: int("UPLOAD_MAX_BYTES", 50 * 1024 * 1024),
+};
+
+export type Env = typeof env;
+
+/** The secret that seals session cookies; refuses a short one outside development. */
+export function sessionSecret(): string {
+  const secret = env.session.secret;
+  if (secret.length >= 32) return secret;
+  if (env.production) {
+    throw new Error(
+      "SESSION_SECRET must be at least 32 characters in production. Set it (for example `openssl rand -hex 32`) and start again.",
+    );
+  }
+  return "development-only-secret-not-for-production-use-000";
+}

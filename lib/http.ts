@@ -1,0 +1,39 @@
+// Shared pieces of the route handlers: the JSON error shape and the status mapping.
+import { NextResponse } from "next/server";
+import { ZodError } from "zod";
+import { AppError } from "@/lib/errors";
+
+export function errorResponse(status: number, code: string, message: string, headers?: HeadersInit) {
+  return NextResponse.json({ error: { code, message } }, { status, headers });
+}
+
+export function toErrorResponse(e: unknown) {
+  if (e instanceof AppError) return errorResponse(e.status, e.code, e.message);
+  if (e instanceof ZodError) {
+    const first = e.issues[0];
+    const where = first?.path.length ? `${first.path.join(".")}: ` : "";
+    return errorResponse(422, "bad_input", `${where}${first?.message ?? "The request is not valid."}`);
+  }
+  console.error(e);
+  return errorResponse(500, "internal", "Something went wrong on our side. Nothing was changed; try again in a moment.");
+}
+
+/** Wraps a route handler so that every thrown error gets the JSON error shape. */
+export function handle<A extends unknown[]>(fn: (...args: A) => Promise<Response>) {
+  return async (...args: A): Promise<Response> => {
+    try {
+      return await fn(...args);
+    } catch (e) {
+      return toErrorResponse(e);
+    }
+  };
+}
+
+/** Parses a JSON body; a body that is not JSON is a 400 with a sentence. */
+export async function readJson(request: Request): Promise<unknown> {
+  try {
+    return await request.json();
+  } catch {
+    throw new AppError(400, "bad_json", "The request body is not valid JSON. Send a JSON object.");
+  }
+}

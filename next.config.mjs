@@ -1,0 +1,10 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  // Packages with optional drivers, worker scripts or data files that must stay on disk
+  // (see the project's STACK notes): bundling them breaks the build or the request.
+  serverExternalPackages: ["knex", "mysql2", "tesseract.js", "pdf-parse", "wink-nlp", "wink-eng-lite-web-model", "s3rver", "bcryptjs"],
+  distDir: process.env.NEXT_DIST_DIR || ".next",
+  poweredByHeader: false,
+};
+
+export default nextConfig;

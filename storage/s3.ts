@@ -1,0 +1,91 @@
+// The S3 client wrapper: endpoint, region, path-style and credentials come from config, so the
+// local fake (s3rver) and any real S3-compatible service work with no code change.
+import {
+  CreateBucketCommand,
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadBucketCommand,
+  HeadObjectCommand,
+  PutObjectCommand,
+  S3Client,
+} from "@aws-sdk/client-s3";
+import type { Readable } from "node:stream";
+import { env } from "@/lib/env";
+
+const globalForS3 = globalThis as unknown as { foldwrightS3?: S3Client };
+
+export function getS3(): S3Client {
+  if (!globalForS3.foldwrightS3) {
+    globalForS3.foldwrightS3 = new S3Client({
+      endpoint: env.s3.endpoint,
+      region: env.s3.region,
+      forcePathStyle: env.s3.forcePathStyle,
+      credentials: { accessKeyId: env.s3.accessKeyId, secretAccessKey: env.s3.secretAccessKey },
+      // Without these two the SDK frames streamed uploads with checksums that some
+      // S3-compatible stores (s3rver among them) keep inside the object.
+      requestChecksumCalculation: "WHEN_REQUIRED",
+      responseChecksumValidation: "WHEN_REQUIRED",
+      maxAttempts: 2,
+    });
+  }
+  return globalForS3.foldwrightS3;
+}
+
+export interface StoredObjectInfo {
+  size: number;
+  contentType?: string;
+  metadata: Record<string, string>;
+}
+
+export async function putObject(
+  key: string,
+  body: Buffer,
+  options: { contentType: string; metadata?: Record<string, string> },
+  bucket = env.s3.bucket,
+): Promise<void> {
+  await getS3().send(
+    new PutObjectCommand({ Bucket: bucket, Key: key, Body: body, ContentType: options.contentType, Metadata: options.metadata }),
+  );
+}
+
+export async function headObject(key: string, bucket = env.s3.bucket): Promise<StoredObjectInfo | null> {
+  try {
+    const out = await getS3().send(new HeadObjectCommand({ Bucket: bucket, Key: key }));
+    return { size: out.ContentLength ?? 0, contentType: out.ContentType, metadata: out.Metadata ?? {} };
+  } catch (e) {
+    if (e instanceof Error && (e.name === "NotFound" || e.name === "NoSuchKey")) return null;
+    throw e;
+  }
+}
+
+export async function getObjectStream(key: string, bucket = env.s3.bucket): Promise<Readable> {
+  const out = await getS3().send(new GetObjectCommand({ Bucket: bucket, Key: key }));
+  return out.Body as Readable;
+}
+
+export async function getObjectBytes(key: string, bucket = env.s3.bucket): Promise<Buffer> {
+  const out = await getS3().send(new GetObjectCommand({ Bucket: bucket, Key: key }));
+  return Buffer.from(await out.Body!.transformToByteArray());
+}
+
+export async function deleteObject(key: string, bucket = env.s3.bucket): Promise<void> {
+  await getS3().send(new DeleteObjectCommand({ Bucket: bucket, Key: key }));
+}
+
+export async function ensureBucket(bucket = env.s3.bucket): Promise<void> {
+  try {
+    await getS3().send(new HeadBucketCommand({ Bucket: bucket }));
+  } catch {
+    await getS3().send(new CreateBucketCommand({ Bucket: bucket }));
+  }
+}
+
+/** True when the bucket answers; used by the health route. */
+export async function checkStorage(bucket = env.s3.bucket): Promise<boolean> {
+  try {
+    await getS3().send(new HeadBucketCommand({ Bucket: bucket }));
+    return true;
+  } catch {
+    return false;
+  }
+}

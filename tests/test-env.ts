@@ -1,0 +1,15 @@
+// The settings every integration and e2e test runs with: its own database and bucket on the
+// same local servers, and an app port of its own. Applied before lib/env is first imported.
+export const TEST_ENV: Record<string, string> = {
+  DATABASE_NAME: "foldwright_test",
+  S3_BUCKET: "foldwright-test",
+  PORT: "3100",
+  SESSION_SECRET: "test-only-session-secret-0123456789abcdef",
+  BCRYPT_COST: "4",
+  SIGN_IN_MAX_FAILURES: "3",
+  NEXT_TELEMETRY_DISABLED: "1",
+};
+
+export function applyTestEnv(): void {
+  for (const [k, v] of Object.entries(TEST_ENV)) if (process.env[k] === undefined) process.env[k] = v;
+}
