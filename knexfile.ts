@@ -4,6 +4,10 @@
 import type { Knex } from "knex";
 import path from "node:path";
 import { env } from "./lib/env";
+import { migrationSource } from "./db/module-source";
+
+export const MIGRATIONS_DIR = path.join(env.root, "db/migrations");
+export const SEEDS_DIR = path.join(env.root, "db/seeds");
 
 type Role = "app" | "owner";
 
@@ -23,12 +27,9 @@ export function knexConfig(role: Role = "app", database = env.db.name): Knex.Con
     },
     pool: { min: 0, max: role === "app" ? env.db.poolMax : 2 },
     migrations: {
-      directory: path.join(env.root, "db/migrations"),
+      migrationSource: migrationSource(MIGRATIONS_DIR),
       tableName: "knex_migrations",
-      extension: "ts",
-      loadExtensions: [".ts"],
     },
-    seeds: { directory: path.join(env.root, "db/seeds"), loadExtensions: [".ts"] },
   };
 }
 

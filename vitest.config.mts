@@ -1,6 +1,5 @@
 import path from "node:path";
 import { defineConfig } from "vitest/config";
-import { TEST_ENV } from "./tests/test-env";
 
 // Three projects: `unit` needs nothing running; `integration` talks to the real MariaDB and
 // S3 fake started by tests/global-setup.ts; `e2e` drives Debian's chromium against a built app.
@@ -23,7 +22,6 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/global-setup.ts"],
-          env: TEST_ENV,
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,
@@ -36,7 +34,6 @@ export default defineConfig({
           include: ["tests/e2e/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/global-setup.ts", "tests/e2e/app-setup.ts"],
-          env: TEST_ENV,
           fileParallelism: false,
           testTimeout: 120_000,
           hookTimeout: 300_000,

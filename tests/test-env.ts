@@ -8,6 +8,7 @@ export const TEST_ENV: Record<string, string> = {
   BCRYPT_COST: "4",
   SIGN_IN_MAX_FAILURES: "3",
   NEXT_TELEMETRY_DISABLED: "1",
+  AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",
 };
 
 export function applyTestEnv(): void {

@@ -13,6 +13,9 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("failed_sign_ins").unsigned().notNullable().defaultTo(0);
     t.dateTime("locked_until").nullable();
     t.dateTime("last_sign_in_at").nullable();
+    // Sealed cookies carry the epoch they were issued in; sign-out bumps it, so a copied
+    // cookie stops working on every device at once.
+    t.integer("session_epoch").unsigned().notNullable().defaultTo(0);
     t.timestamps(true, true);
   });
   await grantApp(knex, ["users"], READ_WRITE);

@@ -6,6 +6,7 @@ import { env, sessionSecret } from "@/lib/env";
 
 export interface SessionData {
   userId?: number;
+  epoch?: number;
   issuedAt?: number;
   lastSeen?: number;
 }
@@ -27,7 +28,7 @@ export async function getSession() {
 
 /** Signed in, not idle past SESSION_IDLE_MINUTES, not past SESSION_MAX_HOURS. */
 export function isSessionLive(data: SessionData, now = Date.now()): data is Required<SessionData> {
-  if (!data.userId || !data.lastSeen || !data.issuedAt) return false;
+  if (!data.userId || !data.lastSeen || !data.issuedAt || data.epoch === undefined) return false;
   if (now - data.lastSeen > env.session.idleMinutes * 60_000) return false;
   return now - data.issuedAt <= env.session.maxHours * 3_600_000;
 }

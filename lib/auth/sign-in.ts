@@ -1,7 +1,7 @@
 import "server-only";
 // Sign-in and sign-out shared by the route handlers and the server actions.
-import { getSession } from "@/lib/auth/session";
-import { checkCredentials, type SignInResult } from "@/lib/data/users";
+import { getSession, isSessionLive } from "@/lib/auth/session";
+import { checkCredentials, endUserSessions, type SignInResult } from "@/lib/data/users";
 
 export async function signIn(email: string, password: string): Promise<SignInResult> {
   const result = await checkCredentials(email, password);
@@ -9,6 +9,7 @@ export async function signIn(email: string, password: string): Promise<SignInRes
     const session = await getSession();
     const now = Date.now();
     session.userId = result.user.id;
+    session.epoch = result.epoch;
     session.issuedAt = now;
     session.lastSeen = now;
     await session.save();
@@ -18,5 +19,6 @@ export async function signIn(email: string, password: string): Promise<SignInRes
 
 export async function signOut(): Promise<void> {
   const session = await getSession();
+  if (isSessionLive(session)) await endUserSessions(session.userId);
   session.destroy();
 }

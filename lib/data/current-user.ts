@@ -5,12 +5,12 @@ import { redirect } from "next/navigation";
 import { getSession, isSessionLive } from "@/lib/auth/session";
 import { can, type Permission } from "@/lib/auth/permissions";
 import { notAllowed, signedOut } from "@/lib/errors";
-import { findActiveUser, type CurrentUser } from "@/lib/data/users";
+import { findSessionUser, type CurrentUser } from "@/lib/data/users";
 
 export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => {
   const session = await getSession();
   if (!isSessionLive(session)) return null;
-  return findActiveUser(session.userId);
+  return findSessionUser(session.userId, session.epoch);
 });
 
 /** For route handlers and server actions: throws 401 / 403 errors. */

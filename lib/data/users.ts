@@ -12,8 +12,12 @@ export interface CurrentUser {
   role: Role;
 }
 
+interface UserRow extends CurrentUser {
+  session_epoch: number;
+}
+
 export type SignInResult =
-  | { ok: true; user: CurrentUser }
+  | { ok: true; user: CurrentUser; epoch: number }
   | { ok: false; code: "wrong_credentials" | "account_locked"; message: string; lockedUntil?: Date };
 
 const WRONG = "That e-mail and password do not match an account. Check both and try again.";
@@ -47,10 +51,22 @@ export async function checkCredentials(emailInput: string, password: string): Pr
     return { ok: false, code: "wrong_credentials", message: WRONG };
   }
   await db("users").where({ id: row.id }).update({ failed_sign_ins: 0, locked_until: null, last_sign_in_at: now });
-  return { ok: true, user: { id: row.id, email: row.email, name: row.name, role: row.role } };
+  return { ok: true, user: toCurrentUser(row), epoch: row.session_epoch };
 }
 
-export async function findActiveUser(id: number): Promise<CurrentUser | null> {
-  const row = await getDb()("users").where({ id, active: true }).first("id", "email", "name", "role");
-  return row ? { id: row.id, email: row.email, name: row.name, role: row.role } : null;
+function toCurrentUser(row: UserRow): CurrentUser {
+  return { id: row.id, email: row.email, name: row.name, role: row.role };
+}
+
+/** The user behind a session, if the account is active and the session's epoch is current. */
+export async function findSessionUser(id: number, epoch: number): Promise<CurrentUser | null> {
+  const row: UserRow | undefined = await getDb()("users")
+    .where({ id, active: true, session_epoch: epoch })
+    .first("id", "email", "name", "role", "session_epoch");
+  return row ? toCurrentUser(row) : null;
+}
+
+/** Ends every session of the user (sign-out, deactivation). */
+export async function endUserSessions(id: number): Promise<void> {
+  await getDb()("users").where({ id }).increment("session_epoch", 1);
 }
