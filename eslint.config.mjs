@@ -1,7 +1,9 @@
-import next from "eslint-config-next";
+import nextVitals from "eslint-config-next/core-web-vitals";
+import nextTs from "eslint-config-next/typescript";
 
 const config = [
-  { ignores: [".next/**", "node_modules/**", ".data/**", "next-env.d.ts"] },
-  ...next,
+  { ignores: [".next/**", ".next-test/**", "node_modules/**", ".data/**", "next-env.d.ts"] },
+  ...nextVitals,
+  ...nextTs,
 ];
 export default config;

@@ -25,7 +25,7 @@ export function buildIsFresh(distDir: string): boolean {
   return SOURCES.every((s) => newestChange(s) < built);
 }
 
-export async function buildApp(distDir: string, extraEnv: NodeJS.ProcessEnv = {}): Promise<boolean> {
+export async function buildApp(distDir: string, extraEnv: Record<string, string> = {}): Promise<boolean> {
   if (buildIsFresh(distDir)) return false;
   await run(process.execPath, [NEXT_BIN(), "build"], {
     cwd: env.root,
@@ -40,7 +40,7 @@ export interface AppServer {
   stop(): Promise<void>;
 }
 
-export async function serveApp(options: { distDir: string; port: number; dev?: boolean; env?: NodeJS.ProcessEnv; quiet?: boolean }): Promise<AppServer> {
+export async function serveApp(options: { distDir: string; port: number; dev?: boolean; env?: Record<string, string>; quiet?: boolean }): Promise<AppServer> {
   const child = spawn(process.execPath, [NEXT_BIN(), options.dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(options.port)], {
     cwd: env.root,
     env: { ...process.env, ...options.env, NEXT_DIST_DIR: options.distDir, NEXT_TELEMETRY_DISABLED: "1" },
