@@ -1,5 +1,6 @@
 import { PDFParse } from "pdf-parse";
 import type { Deadline } from "./deadline";
+import { resolvePdfAssets } from "./pdf-assets";
 import { recognizeImage } from "./ocr-engine";
 import type { ReadOptions } from "./types";
 import { describeDamagedPdf, describePageLimit, describePasswordPdf, UnreadableError } from "./unreadable";
@@ -18,7 +19,7 @@ type PdfLimits = Pick<ReadOptions, "maxPages" | "minLettersPerPage" | "ocrScale"
  */
 export async function readPdf(bytes: Uint8Array, limits: PdfLimits, deadline: Deadline): Promise<PdfText> {
   // A copy, because pdf.js may take over the buffer it is given.
-  const parser = new PDFParse({ data: new Uint8Array(bytes), verbosity: 0 });
+  const parser = new PDFParse({ data: new Uint8Array(bytes), verbosity: 0, ...resolvePdfAssets() });
   const stop = () => void parser.destroy().catch(() => undefined);
   try {
     const { total } = await deadline.race(parser.getInfo(), stop);
