@@ -30,7 +30,7 @@ export async function sniffFile(
   if (sizeError) return { ok: false, error: sizeError };
 
   const claimed = NAMED_KINDS[readExtension(originalName)];
-  const detected = await fileTypeFromBuffer(bytes);
+  const detected = (await fileTypeFromBuffer(bytes)) ?? detectLatePdfHeader(bytes);
   if (!detected) return { ok: false, error: describeUnknown(claimed?.label) };
 
   const kind = (Object.keys(ACCEPTED_KINDS) as FileKind[]).find(
@@ -80,6 +80,13 @@ function describeRefused(detectedExtension: string, originalName: string, nameCl
     code: "unsupported_type",
     message: `This file is ${what}. ${ACCEPTED_SENTENCE}${advice ? ` ${advice}` : ""}`,
   };
+}
+
+// Some scanners and mail gateways put a few bytes before "%PDF-". Acrobat and pdf.js accept the
+// header anywhere in the first 1024 bytes; file-type looks only at offset 0.
+function detectLatePdfHeader(bytes: Uint8Array): { ext: string; mime: string } | undefined {
+  const head = Buffer.from(bytes.subarray(0, 1024)).toString("latin1");
+  return head.indexOf("%PDF-") > 0 ? { ext: "pdf", mime: "application/pdf" } : undefined;
 }
 
 function readExtension(name: string): string {

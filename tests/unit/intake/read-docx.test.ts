@@ -59,6 +59,13 @@ describe("readDocx through readDocument", () => {
     });
   });
 
+  it("takes a size saturated at 4 GiB (0xFFFFFFFF) without a Zip64 field at face value", async () => {
+    const saturated = makeLyingPart("word/media/image2.png", 16, 0xffffffff);
+    const outcome = await readDocument(await repackDocx(await makeDocx(PARAGRAPHS), [saturated]), DOCX);
+    expect(outcome).toMatchObject({ code: "zip_bomb" });
+    if (outcome.status === "unreadable") expect(outcome.reason).toMatch(/^This Word file would unpack to 4,096 MB /);
+  });
+
   it("calls a truncated Word file damaged", async () => {
     const whole = await makeDocx(PARAGRAPHS);
     const outcome = await readDocument(whole.subarray(0, Math.floor(whole.length * 0.6)), DOCX);

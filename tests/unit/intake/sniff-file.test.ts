@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { readDocument } from "@/lib/intake/read-document";
 import { checkFileSize, sniffFile } from "@/lib/intake/sniff-file";
 import { makeDocx, makeGrayTiff, makeTextPdf, renderTextPng } from "@/tests/helpers/make-files";
 import { makeElfBytes, makeExeBytes, makeNoiseBytes } from "./make-hostile-files";
@@ -21,6 +22,18 @@ describe("sniffFile accepts what Foldwright keeps, by content", () => {
     for (const [bytes, name, kind, mediaType, nameMatches] of cases) {
       expect(await sniffFile(bytes, name)).toMatchObject({ ok: true, kind, mediaType, nameMatches });
     }
+  });
+});
+
+describe("sniffFile tolerates what PDF readers tolerate", () => {
+  it("accepts a PDF whose header comes after a few stray bytes, and pdf.js reads it", async () => {
+    const pdf = await makeTextPdf([["Bank reconciliation for March, prepared by the bookkeeper."]]);
+    const shifted = new Uint8Array([...new TextEncoder().encode("\r\n\r\n"), ...pdf]);
+    expect(await sniffFile(shifted, "recon.pdf")).toMatchObject({ ok: true, kind: "pdf" });
+    expect(await readDocument(shifted, "application/pdf")).toMatchObject({
+      status: "ready",
+      text: "Bank reconciliation for March, prepared by the bookkeeper.",
+    });
   });
 });
 
