@@ -21,9 +21,14 @@ let idleTimer: NodeJS.Timeout | undefined;
 
 /** OCRs one PNG/JPEG/TIFF image within the deadline; the time spent waiting for the worker counts. */
 export function recognizeImage(image: Uint8Array, deadline: Deadline): Promise<string> {
-  const job = queue.then(() => runRecognition(image, deadline));
+  const state = { running: false };
+  const job = queue.then(() => runRecognition(image, deadline, state));
   queue = job.catch(() => undefined);
-  return deadline.race(job, () => void discardEngine());
+  // Stop the worker only if this page is on it: a page still waiting its turn must not kill
+  // another file's OCR; it gives up by itself when its turn comes (`deadline.check()`).
+  return deadline.race(job, () => {
+    if (state.running) void discardEngine();
+  });
 }
 
 /** Stops the OCR worker; call on server shutdown and at the end of scripts and test files. */
@@ -32,15 +37,17 @@ export async function shutdownOcr(): Promise<void> {
   await discardEngine();
 }
 
-async function runRecognition(image: Uint8Array, deadline: Deadline): Promise<string> {
+async function runRecognition(image: Uint8Array, deadline: Deadline, state: { running: boolean }): Promise<string> {
   deadline.check(); // the budget may have run out while this page waited its turn
   clearTimeout(idleTimer);
+  state.running = true;
   const current = await obtainEngine();
   try {
     // Copy: tesseract.js transfers the buffer to its thread, and the caller may still need it.
     const result = await Promise.race([current.worker.recognize(Buffer.from(image)), current.crashed]);
     return result.data.text;
   } finally {
+    state.running = false;
     current.pages += 1;
     if (current.pages >= RECYCLE_AFTER_PAGES) await discardEngine(current);
     idleTimer = setTimeout(() => void discardEngine(), IDLE_SHUTDOWN_MS).unref();

@@ -4,7 +4,7 @@ import { readDocument } from "@/lib/intake/read-document";
 import { makeImagePdf, makeTextPdf, renderTextPng } from "@/tests/helpers/make-files";
 import { measureWordRecall } from "./word-recall";
 
-// Each OCR'd page costs a few seconds, so this file reads only four pages in all.
+// Each OCR'd page costs a few seconds, so this file reads only a handful of pages in all.
 const OCR_TIMEOUT = 60_000;
 const NOTICE = [
   "Department of the Treasury, Internal Revenue Service",
@@ -67,6 +67,14 @@ describe("OCR of images and scanned PDFs", () => {
     });
     const next = await readDocument(png, PNG_TYPE);
     expect(next.status).toBe("ready");
+  });
+
+  it("lets a file that times out while waiting for OCR leave the file being read alone", { timeout: OCR_TIMEOUT }, async () => {
+    const png = await renderTextPng(NOTICE);
+    const first = readDocument(png, PNG_TYPE); // takes the OCR worker
+    const second = readDocument(png, PNG_TYPE, { timeLimitMs: 50 }); // queues behind it
+    expect(await second).toMatchObject({ status: "unreadable", code: "time_limit" });
+    expect(await first).toMatchObject({ status: "ready", ocrUsed: true });
   });
 });
 
