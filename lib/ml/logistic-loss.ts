@@ -1,0 +1,93 @@
+// The binary L2-regularised logistic loss over sparse rows, with an unpenalised intercept:
+//   f(w, b) = ½‖w‖² + Σᵢ cᵢ log(1 + exp(−yᵢ zᵢ)),   zᵢ = w·xᵢ + b,  yᵢ ∈ {−1, +1}
+// where cᵢ = C · (class weight of yᵢ). The parameters live in one vector θ = (w₀ … wₙ₋₁, b).
+//   ∇f   = (w, 0) + Σᵢ cᵢ (σ(yᵢzᵢ) − 1) yᵢ (xᵢ, 1)
+//   ∇²f  = diag(1, …, 1, 0) + Σᵢ Dᵢ (xᵢ, 1)(xᵢ, 1)ᵀ,   Dᵢ = cᵢ σ(yᵢzᵢ)(1 − σ(yᵢzᵢ))
+// The Hessian is only ever applied to a vector (two passes over the rows), never formed.
+import { addTransposedProduct, multiplyRows, type CsrMatrix } from "./csr";
+
+export interface BinaryProblem {
+  x: CsrMatrix;
+  /** +1 for the class, −1 for the rest. */
+  y: Float64Array;
+  /** cᵢ = C · class weight of row i. */
+  cost: Float64Array;
+}
+
+export interface LogisticLoss {
+  /** f(θ); remembers zᵢ for the gradient at the same θ. */
+  evaluate(theta: Float64Array): number;
+  /** ∇f at the θ last given to evaluate; also fixes the Dᵢ used by the Hessian products. */
+  gradient(theta: Float64Array, out: Float64Array): void;
+  /** out = ∇²f · v at the θ of the last gradient call. */
+  multiplyHessian(v: Float64Array, out: Float64Array): void;
+  /** Diagonal of ∇²f (for the preconditioner). */
+  diagonalHessian(out: Float64Array): void;
+}
+
+/** Numerically safe log(1 + exp(−t)). */
+export function logOnePlusExpNeg(t: number): number {
+  return t >= 0 ? Math.log1p(Math.exp(-t)) : -t + Math.log1p(Math.exp(t));
+}
+
+/** Numerically safe logistic function σ(t) = 1 / (1 + exp(−t)). */
+export function sigmoid(t: number): number {
+  if (t >= 0) return 1 / (1 + Math.exp(-t));
+  const e = Math.exp(t);
+  return e / (1 + e);
+}
+
+/** Creates the loss for one binary problem; scratch arrays are allocated once here. */
+export function createLogisticLoss(problem: BinaryProblem): LogisticLoss {
+  const { x, y, cost } = problem;
+  const n = x.cols;
+  const l = x.rows;
+  const z = new Float64Array(l);
+  const d = new Float64Array(l);
+  const u = new Float64Array(l);
+
+  return {
+    evaluate(theta) {
+      multiplyRows(x, theta, theta[n], z);
+      let f = 0;
+      for (let j = 0; j < n; j++) f += theta[j] * theta[j];
+      f *= 0.5;
+      for (let i = 0; i < l; i++) f += cost[i] * logOnePlusExpNeg(y[i] * z[i]);
+      return f;
+    },
+    gradient(theta, out) {
+      let biasGrad = 0;
+      for (let i = 0; i < l; i++) {
+        const s = sigmoid(y[i] * z[i]);
+        d[i] = cost[i] * s * (1 - s);
+        u[i] = cost[i] * (s - 1) * y[i];
+        biasGrad += u[i];
+      }
+      for (let j = 0; j < n; j++) out[j] = theta[j];
+      addTransposedProduct(x, u, out);
+      out[n] = biasGrad;
+    },
+    multiplyHessian(v, out) {
+      multiplyRows(x, v, v[n], u);
+      let biasOut = 0;
+      for (let i = 0; i < l; i++) {
+        u[i] *= d[i];
+        biasOut += u[i];
+      }
+      for (let j = 0; j < n; j++) out[j] = v[j];
+      addTransposedProduct(x, u, out);
+      out[n] = biasOut;
+    },
+    diagonalHessian(out) {
+      const { indptr, indices, data } = x;
+      out.fill(1, 0, n);
+      let bias = 0;
+      for (let i = 0; i < l; i++) {
+        const di = d[i];
+        bias += di;
+        for (let k = indptr[i]; k < indptr[i + 1]; k++) out[indices[k]] += di * data[k] * data[k];
+      }
+      out[n] = bias;
+    },
+  };
+}

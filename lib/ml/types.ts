@@ -1,0 +1,23 @@
+// Shapes shared by the modules of lib/ml. Labels are plain strings (cabinet type ids or names)
+// so the engine knows nothing about the app that calls it.
+
+/** One document as the app or the command line hands it over. */
+export interface MlDocument {
+  text: string;
+  filename?: string;
+  meta?: DocumentMeta;
+}
+
+/** A few facts about the file that carry signal beyond its words. */
+export interface DocumentMeta {
+  /** File kind such as "pdf", "docx", "jpeg". */
+  kind?: string;
+  pages?: number;
+  /** True when the text came from OCR. */
+  ocr?: boolean;
+}
+
+/** A labelled document for training and evaluation. */
+export interface LabelledDocument extends MlDocument {
+  label: string;
+}
