@@ -1,0 +1,91 @@
+// One-vs-rest wrapper (DESIGN.md §5): one binary logistic model per class, class k against all
+// others, trained on worker threads when asked for more than one thread. Workers share the
+// matrix through SharedArrayBuffers and pull the next class when done with one, so a few slow
+// classes do not leave a thread idle. `threads: 1` (or workers failing to start, as inside a
+// bundler that cannot load the worker file) trains in this thread with the same code.
+import { availableParallelism } from "node:os";
+import { assertFiniteCsr, type CsrMatrix } from "./csr";
+import { checkLogisticOptions, trainClassAgainstRest, type LogisticOptions } from "./logistic";
+import { runClassWorkers, type ClassResult } from "./ovr-pool";
+
+export interface OneVsRestOptions extends LogisticOptions {
+  /** Worker threads; 1 trains in the calling thread without workers. */
+  threads: number;
+}
+
+export interface OneVsRestModel {
+  /** Weights of class k are row k: weights[k·cols … (k+1)·cols). */
+  weights: Float64Array;
+  intercepts: Float64Array;
+  cols: number;
+  /** Newton steps per class (one binary model per class). */
+  iterations: Int32Array;
+  converged: boolean;
+  /** Threads that actually trained (1 when workers were unavailable). */
+  threadsUsed: number;
+}
+
+/** Default thread count: the cores there are (at most 8: more rarely pays on office-sized data). */
+export function chooseThreads(): number {
+  return Math.max(1, Math.min(availableParallelism(), 8));
+}
+
+/** Checks labels: one per row, ids in range, at least two classes, each class present. */
+function checkLabels(x: CsrMatrix, labelIds: Int32Array, classCount: number): void {
+  if (labelIds.length !== x.rows) throw new Error(`There are ${x.rows} rows but ${labelIds.length} labels.`);
+  if (x.rows === 0) throw new Error("Cannot train on zero documents.");
+  if (classCount < 2) throw new Error("Training needs at least two different labels; only one was given.");
+  const seen = new Uint8Array(classCount);
+  for (const id of labelIds) {
+    if (!(id >= 0 && id < classCount)) throw new Error(`Label id ${id} is outside 0..${classCount - 1}.`);
+    seen[id] = 1;
+  }
+  const missing = seen.indexOf(0);
+  if (missing >= 0) throw new Error(`Class ${missing} has no rows; drop it or add documents.`);
+}
+
+/** Fits one binary model for class k in this thread. */
+function trainClass(x: CsrMatrix, labelIds: Int32Array, k: number, options: LogisticOptions): ClassResult {
+  const m = trainClassAgainstRest(x, labelIds, k, options);
+  return { classId: k, weights: m.weights, intercept: m.intercept, iterations: m.iterations, converged: m.converged };
+}
+
+/** Trains all classes; x rows are documents, labelIds[i] the class index of row i. */
+export async function trainOneVsRest(
+  x: CsrMatrix,
+  labelIds: Int32Array,
+  classCount: number,
+  options: OneVsRestOptions,
+): Promise<OneVsRestModel> {
+  checkLogisticOptions(options);
+  checkLabels(x, labelIds, classCount);
+  assertFiniteCsr(x);
+  const threads = Math.max(1, Math.min(Math.floor(options.threads), classCount));
+  let results: ClassResult[] | null = null;
+  let threadsUsed = 1;
+  if (threads > 1) {
+    results = await runClassWorkers(x, labelIds, classCount, options, threads).catch(() => null);
+    if (results !== null) threadsUsed = threads;
+  }
+  if (results === null) {
+    results = [];
+    for (let k = 0; k < classCount; k++) results.push(trainClass(x, labelIds, k, options));
+  }
+  return collectModel(results, x.cols, classCount, threadsUsed);
+}
+
+/** Packs per-class results into one row-major weight block. */
+function collectModel(results: ClassResult[], cols: number, classCount: number, threadsUsed: number): OneVsRestModel {
+  const weights = new Float64Array(classCount * cols);
+  const intercepts = new Float64Array(classCount);
+  const iterations = new Int32Array(classCount);
+  let converged = true;
+  for (const r of results) {
+    weights.set(r.weights, r.classId * cols);
+    intercepts[r.classId] = r.intercept;
+    iterations[r.classId] = r.iterations;
+    converged &&= r.converged;
+  }
+  if (results.length !== classCount) throw new Error("Training lost a class; this is a bug.");
+  return { weights, intercepts, cols, iterations, converged, threadsUsed };
+}
