@@ -65,6 +65,20 @@ export const env = {
   },
   demoPassword: text("DEMO_PASSWORD", "foldwright-demo"),
   uploadMaxBytes: int("UPLOAD_MAX_BYTES", 50 * 1024 * 1024),
+  uploadMaxFiles: int("UPLOAD_MAX_FILES", 50),
+  read: {
+    timeLimitMs: int("READ_TIME_LIMIT_SECONDS", 120) * 1000,
+    maxPages: int("READ_MAX_PAGES", 500),
+  },
+  jobs: {
+    /** Run background workers inside this process (off for a web-only instance). */
+    enabled: bool("JOBS_ENABLED", true),
+    concurrency: int("JOBS_CONCURRENCY", 1),
+    pollMs: int("JOBS_POLL_MS", 1000),
+    leaseSeconds: int("JOBS_LEASE_SECONDS", 300),
+    maxAttempts: int("JOBS_MAX_ATTEMPTS", 5),
+    retryBaseSeconds: int("JOBS_RETRY_BASE_SECONDS", 5),
+  },
 };
 
 export type Env = typeof env;

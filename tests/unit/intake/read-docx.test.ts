@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { readDocument } from "@/lib/intake/read-document";
 import { sniffFile } from "@/lib/intake/sniff-file";
 import { makeDocx } from "@/tests/helpers/make-files";
-import { makeLyingPart, makeTinyPart, makeZeroPart, repackDocx } from "./make-hostile-files";
+import { makeLyingPart, makeTinyPart, makeZeroPart, repackDocx } from "../../helpers/make-hostile-files";
 
 const DOCX = "application/vnd.openxmlformats-officedocument.wordprocessingml.document";
 const PARAGRAPHS = [

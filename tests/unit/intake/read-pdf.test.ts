@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { shutdownOcr } from "@/lib/intake/ocr-engine";
 import { readDocument } from "@/lib/intake/read-document";
 import { makeTextPdf } from "@/tests/helpers/make-files";
-import { encryptWithQpdf } from "./make-hostile-files";
+import { encryptWithQpdf } from "../../helpers/make-hostile-files";
 
 const PDF = "application/pdf";
 const PAGE_ONE = [

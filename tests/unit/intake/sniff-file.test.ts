@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { readDocument } from "@/lib/intake/read-document";
 import { checkFileSize, sniffFile } from "@/lib/intake/sniff-file";
 import { makeDocx, makeGrayTiff, makeTextPdf, renderTextPng } from "@/tests/helpers/make-files";
-import { makeElfBytes, makeExeBytes, makeNoiseBytes } from "./make-hostile-files";
+import { makeElfBytes, makeExeBytes, makeNoiseBytes } from "../../helpers/make-hostile-files";
 
 const KEEPS = "Foldwright keeps PDF, Word (.docx), PNG, JPEG and TIFF files.";
 

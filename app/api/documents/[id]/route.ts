@@ -1,0 +1,13 @@
+import { NextResponse } from "next/server";
+import { handle } from "@/lib/http";
+import { requireUser } from "@/lib/data/current-user";
+import { getDocument } from "@/lib/data/documents";
+import { documentIdSchema } from "@/lib/validations/documents";
+
+export const dynamic = "force-dynamic";
+
+export const GET = handle(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {
+  const user = await requireUser("documents.read", "see documents");
+  const id = documentIdSchema.parse((await params).id);
+  return NextResponse.json({ document: await getDocument(user, id) });
+});

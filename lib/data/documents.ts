@@ -1,0 +1,134 @@
+import "server-only";
+// Reading documents: one with its state and masked text, lists with filters and search, and
+// the original's location for a download — all through the ethical wall.
+import { getDb } from "@/db";
+import { maskSensitive } from "@/lib/intake";
+import { notFound } from "@/lib/errors";
+import { documentsWithMatters, whereDocumentVisible } from "@/lib/data/document-access";
+import type { CurrentUser } from "@/lib/data/users";
+
+export interface DocumentSummary {
+  id: number;
+  name: string;
+  mediaType: string;
+  sizeBytes: number;
+  status: "reading" | "ready" | "unreadable";
+  reason: string | null;
+  uploadedAt: string;
+  uploadedBy: string;
+  matter: string | null;
+  cabinetType: string | null;
+  ocrUsed: boolean;
+  pageCount: number | null;
+}
+
+export interface DocumentDetail extends DocumentSummary {
+  charCount: number | null;
+  readMs: number | null;
+  sensitive: { ssn: number; routing: number; card: number };
+  /** The text read, with SSNs, routing and card numbers masked. */
+  text: string | null;
+  textTruncated: boolean;
+}
+
+const PREVIEW_CHARS = 200_000;
+
+const SUMMARY_COLUMNS = [
+  "d.id",
+  "d.original_name",
+  "d.media_type",
+  "d.size_bytes",
+  "d.status",
+  "d.unreadable_reason",
+  "d.uploaded_at",
+  "d.ocr_used",
+  "d.page_count",
+  "u.name as uploader",
+  "m.number as matter",
+  "c.name as cabinet",
+];
+
+type Row = Record<string, unknown>;
+
+function toSummary(r: Row): DocumentSummary {
+  return {
+    id: Number(r.id),
+    name: String(r.original_name),
+    mediaType: String(r.media_type),
+    sizeBytes: Number(r.size_bytes),
+    status: r.status as DocumentSummary["status"],
+    reason: (r.unreadable_reason as string | null) ?? null,
+    uploadedAt: new Date(r.uploaded_at as string).toISOString(),
+    uploadedBy: String(r.uploader),
+    matter: (r.matter as string | null) ?? null,
+    cabinetType: (r.cabinet as string | null) ?? null,
+    ocrUsed: Boolean(r.ocr_used),
+    pageCount: r.page_count === null ? null : Number(r.page_count),
+  };
+}
+
+function visibleDocuments(user: CurrentUser) {
+  const db = getDb();
+  const q = documentsWithMatters(db)
+    .leftJoin("users as u", "u.id", "d.uploaded_by")
+    .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id");
+  return whereDocumentVisible(q, user);
+}
+
+export async function getDocument(user: CurrentUser, id: number): Promise<DocumentDetail> {
+  const r = await visibleDocuments(user)
+    .where("d.id", id)
+    .first([...SUMMARY_COLUMNS, "d.char_count", "d.read_ms", "d.ssn_count", "d.routing_count", "d.card_count", "d.text"]);
+  if (!r) throw notFound("That document");
+  const text = r.text as string | null;
+  return {
+    ...toSummary(r),
+    charCount: r.char_count ?? null,
+    readMs: r.read_ms ?? null,
+    sensitive: { ssn: r.ssn_count, routing: r.routing_count, card: r.card_count },
+    text: text === null ? null : maskSensitive(text.slice(0, PREVIEW_CHARS)),
+    textTruncated: text !== null && text.length > PREVIEW_CHARS,
+  };
+}
+
+export interface DocumentFilters {
+  status?: DocumentSummary["status"];
+  q?: string;
+  uploadedByMe?: boolean;
+  ids?: number[];
+  page: number;
+  pageSize: number;
+}
+
+/** Boolean-mode FULLTEXT needs its operators removed from what a person typed. */
+function toFulltextQuery(q: string): string {
+  return q
+    .replace(/[+\-<>()~*"@]/g, " ")
+    .split(/\s+/)
+    .filter(Boolean)
+    .map((w) => `+${w}*`)
+    .join(" ");
+}
+
+export async function listDocuments(user: CurrentUser, f: DocumentFilters): Promise<{ items: DocumentSummary[]; total: number }> {
+  const base = visibleDocuments(user);
+  if (f.status) base.where("d.status", f.status);
+  if (f.uploadedByMe) base.where("d.uploaded_by", user.id);
+  if (f.ids?.length) base.whereIn("d.id", f.ids);
+  const search = f.q ? toFulltextQuery(f.q) : "";
+  if (search) base.whereRaw("MATCH(d.original_name, d.text) AGAINST (? IN BOOLEAN MODE)", [search]);
+  const [{ total }] = await base.clone().clearSelect().count({ total: "d.id" });
+  const rows = await base
+    .select(SUMMARY_COLUMNS)
+    .orderBy("d.uploaded_at", "desc")
+    .orderBy("d.id", "desc")
+    .limit(f.pageSize)
+    .offset((f.page - 1) * f.pageSize);
+  return { items: rows.map(toSummary), total: Number(total) };
+}
+
+export async function findOriginal(user: CurrentUser, id: number): Promise<{ key: string; name: string; mediaType: string; size: number }> {
+  const r = await visibleDocuments(user).where("d.id", id).first("d.storage_key", "d.original_name", "d.media_type", "d.size_bytes");
+  if (!r) throw notFound("That document");
+  return { key: r.storage_key, name: r.original_name, mediaType: r.media_type, size: Number(r.size_bytes) };
+}

@@ -1,0 +1,107 @@
+import "server-only";
+// Intake: keep the original first, then commit the row. Either nothing is left behind, or a
+// complete row whose original is safe in the bucket — never a row without its file.
+import crypto from "node:crypto";
+import { getDb } from "@/db";
+import { env } from "@/lib/env";
+import { AppError } from "@/lib/errors";
+import { cleanFileName, sha256Hex, sniffFile, type IntakeError } from "@/lib/intake";
+import { enqueueJob } from "@/lib/data/jobs";
+import { documentsWithMatters, whereDocumentVisible } from "@/lib/data/document-access";
+import type { CurrentUser } from "@/lib/data/users";
+import { deleteObject, putObject } from "@/storage/s3";
+import { READ_JOB } from "@/lib/jobs/kinds";
+
+export interface DuplicateOf {
+  id: number | null; // null when the earlier copy sits in a matter this user may not see
+  message: string;
+}
+
+export type UploadResult =
+  | { name: string; status: "reading"; id: number; httpStatus: 201 }
+  | { name: string; status: "duplicate"; duplicateOf: DuplicateOf; httpStatus: 200 }
+  | { name: string; status: "rejected"; error: { code: string; message: string }; httpStatus: number };
+
+export const STORAGE_DOWN = "The document store is not answering, so this file was not saved. Nothing was kept; try again in a minute, and tell your admin if it keeps happening.";
+export const DATABASE_DOWN = "The database is not answering, so this file was not saved. Nothing was kept; try again in a minute, and tell your admin if it keeps happening.";
+
+function rejected(name: string, error: IntakeError | AppError | { status: number; code: string; message: string }): UploadResult {
+  return { name, status: "rejected", error: { code: error.code, message: error.message }, httpStatus: error.status };
+}
+
+function when(d: Date): string {
+  return `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+}
+
+async function describeDuplicate(user: CurrentUser, sha256: string): Promise<DuplicateOf | null> {
+  const db = getDb();
+  const row = await documentsWithMatters(db)
+    .leftJoin("users as u", "u.id", "d.uploaded_by")
+    .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id")
+    .where("d.sha256", sha256)
+    .first("d.id", "d.original_name", "d.uploaded_at", "d.status", "u.name as uploader", "m.number as matter", "m.restricted", "c.name as cabinet");
+  if (!row) return null;
+  const visible = await whereDocumentVisible(documentsWithMatters(db).where("d.id", row.id), user).first("d.id");
+  if (!visible) {
+    return { id: null, message: "This exact file is already held, in a matter you do not have access to. It was not stored again. Ask an admin if you need it." };
+  }
+  const where = row.matter
+    ? `It is filed in ${row.matter}${row.cabinet ? ` › ${row.cabinet}` : ""}.`
+    : "It is not filed yet.";
+  return {
+    id: row.id,
+    message: `This exact file is already held as document #${row.id} ("${row.original_name}"), which came in on ${when(new Date(row.uploaded_at))} from ${row.uploader}. ${where} It was not stored again.`,
+  };
+}
+
+function isDuplicateKey(e: unknown): boolean {
+  return typeof e === "object" && e !== null && (e as { code?: string }).code === "ER_DUP_ENTRY";
+}
+
+export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uint8Array): Promise<UploadResult> {
+  const name = cleanFileName(rawName);
+  const sniff = await sniffFile(bytes, name, { maxBytes: env.uploadMaxBytes });
+  if (!sniff.ok) return rejected(name, sniff.error);
+  const sha256 = sha256Hex(bytes);
+
+  const known = await describeDuplicate(user, sha256).catch(() => {
+    throw new AppError(503, "database_unavailable", DATABASE_DOWN);
+  });
+  if (known) return { name, status: "duplicate", duplicateOf: known, httpStatus: 200 };
+
+  const now = new Date();
+  const key = `originals/${now.getUTCFullYear()}/${String(now.getUTCMonth() + 1).padStart(2, "0")}/${crypto.randomUUID()}`;
+  try {
+    await putObject(key, Buffer.from(bytes), {
+      contentType: sniff.mediaType,
+      metadata: { sha256, "original-name": encodeURIComponent(name), "uploaded-by": String(user.id) },
+    });
+  } catch {
+    return rejected(name, { status: 503, code: "storage_unavailable", message: STORAGE_DOWN });
+  }
+
+  try {
+    const id = await getDb().transaction(async (trx) => {
+      const [docId] = await trx("documents").insert({
+        sha256,
+        original_name: name,
+        media_type: sniff.mediaType,
+        size_bytes: bytes.byteLength,
+        storage_key: key,
+        status: "reading",
+        uploaded_by: user.id,
+      });
+      await enqueueJob(READ_JOB, docId, null, trx);
+      return docId as number;
+    });
+    return { name, status: "reading", id, httpStatus: 201 };
+  } catch (e) {
+    // The row did not commit: remove the object so nothing is half-stored.
+    await deleteObject(key).catch((err) => console.error(`intake: could not remove orphan ${key}:`, err));
+    if (isDuplicateKey(e)) {
+      const winner = await describeDuplicate(user, sha256);
+      if (winner) return { name, status: "duplicate", duplicateOf: winner, httpStatus: 200 };
+    }
+    return rejected(name, { status: 503, code: "database_unavailable", message: DATABASE_DOWN });
+  }
+}

@@ -1,0 +1,65 @@
+import "server-only";
+// Stores what the reading job found, in one transaction with the job's completion.
+import { getDb } from "@/db";
+import { completeJob } from "@/lib/data/jobs";
+import type { ReadOutcome, SensitiveCounts } from "@/lib/intake";
+
+export interface DocumentToRead {
+  id: number;
+  storage_key: string;
+  media_type: string;
+  status: string;
+}
+
+export async function findDocumentToRead(id: number): Promise<DocumentToRead | undefined> {
+  return getDb()("documents").where({ id }).first("id", "storage_key", "media_type", "status");
+}
+
+/** Returns false (and writes nothing) when this worker no longer holds the job. */
+export async function saveReading(
+  jobId: number,
+  workerId: string,
+  documentId: number,
+  outcome: ReadOutcome,
+  counts: SensitiveCounts,
+): Promise<boolean> {
+  return getDb().transaction(async (trx) => {
+    if (!(await completeJob(trx, jobId, workerId))) return false;
+    const common = { read_at: trx.fn.now() };
+    if (outcome.status === "ready") {
+      await trx("documents").where({ id: documentId }).update({
+        ...common,
+        status: "ready",
+        text: outcome.text,
+        page_count: outcome.pageCount,
+        ocr_used: outcome.ocrUsed,
+        ocr_pages: outcome.ocrPages,
+        char_count: outcome.charCount,
+        read_ms: outcome.readMs,
+        ssn_count: counts.ssn,
+        routing_count: counts.routing,
+        card_count: counts.card,
+        unreadable_code: null,
+        unreadable_reason: null,
+      });
+    } else {
+      await trx("documents").where({ id: documentId }).update({
+        ...common,
+        status: "unreadable",
+        unreadable_code: outcome.code,
+        unreadable_reason: outcome.reason,
+      });
+    }
+    return true;
+  });
+}
+
+/** After every retry failed: the document is marked unreadable; its original stays. */
+export async function markReadingFailed(documentId: number, reason: string): Promise<void> {
+  await getDb()("documents").where({ id: documentId, status: "reading" }).update({
+    status: "unreadable",
+    unreadable_code: "reader_failed",
+    unreadable_reason: reason,
+    read_at: getDb().fn.now(),
+  });
+}

@@ -1,0 +1,2 @@
+/** Job kinds in the queue. */
+export const READ_JOB = "read";
