@@ -1,7 +1,7 @@
 """scikit-learn side of `npm run bench:classifier`: the README's reference pipeline on the raw
 CUAD clause files, timed the same way as ours (vectorise, fit, predict), for liblinear and lbfgs.
 
-usage: /usr/bin/python3 sklearn_bench.py TRAIN.jsonl TEST.jsonl  → JSON on stdout
+usage: /usr/bin/python3 sklearn_bench.py SPEC.json  (SPEC: {"train": path, "test": path}) → JSON on stdout
 """
 import json
 import sys
@@ -23,8 +23,9 @@ def load(path):
 
 
 def main():
-    train_text, train_y = load(sys.argv[1])
-    test_text, test_y = load(sys.argv[2])
+    spec = json.load(open(sys.argv[1]))
+    train_text, train_y = load(spec["train"])
+    test_text, test_y = load(spec["test"])
     t0 = time.perf_counter()
     vec = TfidfVectorizer(sublinear_tf=True, ngram_range=(1, 2), min_df=2)
     x = vec.fit_transform(train_text)
