@@ -7,6 +7,8 @@ export const TEST_ENV: Record<string, string> = {
   SESSION_SECRET: "test-only-session-secret-0123456789abcdef",
   BCRYPT_COST: "4",
   SIGN_IN_MAX_FAILURES: "3",
+  UPLOAD_MAX_BYTES: String(2 * 1024 * 1024),
+  JOBS_POLL_MS: "250",
   NEXT_TELEMETRY_DISABLED: "1",
   AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",
 };

@@ -3,7 +3,7 @@ import "server-only";
 // the original's location for a download — all through the ethical wall.
 import { getDb } from "@/db";
 import { maskSensitive } from "@/lib/intake";
-import { notFound } from "@/lib/errors";
+import { AppError, notFound } from "@/lib/errors";
 import { documentsWithMatters, whereDocumentVisible } from "@/lib/data/document-access";
 import type { CurrentUser } from "@/lib/data/users";
 
@@ -75,11 +75,18 @@ function visibleDocuments(user: CurrentUser) {
   return whereDocumentVisible(q, user);
 }
 
+/** 404 when there is no such document; 403 when it sits behind an ethical wall the user is not on. */
+async function missingOrWalled(id: number): Promise<AppError> {
+  const exists = await getDb()("documents").where({ id }).first("id");
+  if (!exists) return notFound("That document");
+  return new AppError(403, "restricted_matter", "This document is in a restricted matter you are not on. Ask an admin or the matter's partner if you need it.");
+}
+
 export async function getDocument(user: CurrentUser, id: number): Promise<DocumentDetail> {
   const r = await visibleDocuments(user)
     .where("d.id", id)
     .first([...SUMMARY_COLUMNS, "d.char_count", "d.read_ms", "d.ssn_count", "d.routing_count", "d.card_count", "d.text"]);
-  if (!r) throw notFound("That document");
+  if (!r) throw await missingOrWalled(id);
   const text = r.text as string | null;
   return {
     ...toSummary(r),
@@ -129,6 +136,6 @@ export async function listDocuments(user: CurrentUser, f: DocumentFilters): Prom
 
 export async function findOriginal(user: CurrentUser, id: number): Promise<{ key: string; name: string; mediaType: string; size: number }> {
   const r = await visibleDocuments(user).where("d.id", id).first("d.storage_key", "d.original_name", "d.media_type", "d.size_bytes");
-  if (!r) throw notFound("That document");
+  if (!r) throw await missingOrWalled(id);
   return { key: r.storage_key, name: r.original_name, mediaType: r.media_type, size: Number(r.size_bytes) };
 }

@@ -2,6 +2,8 @@ import fs from "node:fs";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Client } from "./http";
+import { makeTextPdf } from "../helpers/make-files";
+import { ownerDb } from "../helpers/db";
 
 // Every route handler and page × every role (and signed out) → the expected status.
 // DESIGN.md §2 is the source of the expectations. A new route must join MATRIX: the last test
@@ -11,8 +13,9 @@ const WHO: Who[] = ["signedOut", "clerk", "partner", "admin", "auditor"];
 
 interface Row {
   method: string;
-  path: string;
+  path: string | (() => string);
   file: string; // the route file under app/, to prove coverage
+  note?: string;
   body?: unknown;
   expect: Record<Who, number>;
 }
@@ -29,6 +32,14 @@ const MATRIX: Row[] = [
   // because it names an address that has no account.
   { method: "POST", path: "/api/auth/sign-in", file: "api/auth/sign-in/route.ts", body: { email: "nobody@example.com", password: "x" }, expect: all(401, 401) },
   { method: "POST", path: "/api/auth/sign-out", file: "api/auth/sign-out/route.ts", expect: all(200, 200) },
+  { method: "GET", path: "/api/documents", file: "api/documents/route.ts", expect: all(200, 401) },
+  // An upload whose only file is empty: 422 for the roles that may upload, 403 for the others.
+  { method: "POST", path: "/api/documents", file: "api/documents/route.ts", body: "empty-file", expect: { signedOut: 401, clerk: 422, partner: 403, admin: 422, auditor: 403 } },
+  { method: "GET", path: () => `/api/documents/${fixtures.open}`, file: "api/documents/[id]/route.ts", expect: all(200, 401) },
+  { method: "GET", path: () => `/api/documents/${fixtures.open}/original`, file: "api/documents/[id]/original/route.ts", expect: all(200, 401) },
+  // The restricted demo matter's team is the partner (and admins see everything).
+  { method: "GET", path: () => `/api/documents/${fixtures.walled}`, file: "api/documents/[id]/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 403, partner: 200, admin: 200, auditor: 403 } },
+  { method: "GET", path: () => `/api/documents/${fixtures.walled}/original`, file: "api/documents/[id]/original/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 403, partner: 200, admin: 200, auditor: 403 } },
   { method: "GET", path: "/intake", file: "(app)/intake/page.tsx", expect: page(["clerk", "admin"]) },
   { method: "GET", path: "/review", file: "(app)/review/page.tsx", expect: page(["clerk", "partner", "admin"]) },
   { method: "GET", path: "/cabinets", file: "(app)/cabinets/page.tsx", expect: page(["clerk", "partner", "admin", "auditor"]) },
@@ -38,18 +49,43 @@ const MATRIX: Row[] = [
 ];
 
 const clients = {} as Record<Who, Client>;
+const fixtures = { open: 0, walled: 0 };
+
+async function uploadAsAdmin(label: string): Promise<number> {
+  const form = new FormData();
+  form.append("file", new Blob([await makeTextPdf([[`Matrix fixture ${label} ${Date.now()}`]])], { type: "application/pdf" }), `${label}.pdf`);
+  const res = await clients.admin.request("POST", "/api/documents", form);
+  const body = await res.json();
+  if (res.status !== 201) throw new Error(`fixture upload answered ${res.status}: ${JSON.stringify(body)}`);
+  return body.files[0].id;
+}
+
+function bodyFor(row: Row): unknown {
+  if (row.body !== "empty-file") return row.body;
+  const form = new FormData();
+  form.append("file", new Blob([]), "empty.pdf");
+  return form;
+}
 
 describe("role matrix", () => {
   beforeAll(async () => {
     clients.signedOut = new Client();
     for (const role of ["clerk", "partner", "admin", "auditor"] as const) clients[role] = await Client.signedIn(`${role}@example.com`);
+    fixtures.open = await uploadAsAdmin("open");
+    fixtures.walled = await uploadAsAdmin("walled");
+    const owner = ownerDb();
+    const matter = await owner("matters").where({ restricted: true }).first("id");
+    await owner("documents").where({ id: fixtures.walled }).update({ matter_id: matter.id });
+    await owner.destroy();
   });
 
   for (const row of MATRIX) {
-    it(`${row.method} ${row.path}`, async () => {
+    const label = typeof row.path === "string" ? row.path : row.path().replace(/\d+/, "{id}");
+    it(`${row.method} ${label}${row.note ? ` (${row.note})` : ""}${row.body === "empty-file" ? " (empty file)" : ""}`, async () => {
       const got: Record<string, number> = {};
+      const path = typeof row.path === "string" ? row.path : row.path();
       for (const who of WHO) {
-        got[who] = (await clients[who].request(row.method, row.path, row.body)).status;
+        got[who] = (await clients[who].request(row.method, path, bodyFor(row))).status;
         // Sign-out ends every session of that user: sign in again for the rows after it.
         if (row.path === "/api/auth/sign-out" && who !== "signedOut") clients[who] = await Client.signedIn(`${who}@example.com`);
       }
