@@ -94,3 +94,22 @@ export function assertFiniteCsr(x: CsrMatrix): void {
     }
   }
 }
+
+/** The transpose as CSR (so columns become rows, in row order); `square` squares the values. */
+export function transposeCsr(x: CsrMatrix, square = false): CsrMatrix {
+  const { indptr, indices, data, rows, cols } = x;
+  const outPtr = new Int32Array(cols + 1);
+  for (let p = 0; p < indices.length; p++) outPtr[indices[p] + 1]++;
+  for (let j = 0; j < cols; j++) outPtr[j + 1] += outPtr[j];
+  const next = outPtr.slice(0, cols);
+  const outIdx = new Int32Array(indices.length);
+  const outData = new Float64Array(indices.length);
+  for (let i = 0; i < rows; i++) {
+    for (let p = indptr[i]; p < indptr[i + 1]; p++) {
+      const q = next[indices[p]]++;
+      outIdx[q] = i;
+      outData[q] = square ? data[p] * data[p] : data[p];
+    }
+  }
+  return { rows: cols, cols: rows, indptr: outPtr, indices: outIdx, data: outData };
+}

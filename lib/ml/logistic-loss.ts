@@ -4,7 +4,10 @@
 //   ∇f   = (w, 0) + Σᵢ cᵢ (σ(yᵢzᵢ) − 1) yᵢ (xᵢ, 1)
 //   ∇²f  = diag(1, …, 1, 0) + Σᵢ Dᵢ (xᵢ, 1)(xᵢ, 1)ᵀ,   Dᵢ = cᵢ σ(yᵢzᵢ)(1 − σ(yᵢzᵢ))
 // The Hessian is only ever applied to a vector (two passes over the rows), never formed.
-import { addTransposedProduct, multiplyRows, type CsrMatrix } from "./csr";
+// Each method is a generator that yields its sparse products (lockstep.ts serves them), so many
+// classes can share one pass over the matrix; the element-wise work stays here.
+import type { CsrMatrix } from "./csr";
+import type { ProductSolver } from "./lockstep";
 
 export interface BinaryProblem {
   x: CsrMatrix;
@@ -16,13 +19,13 @@ export interface BinaryProblem {
 
 export interface LogisticLoss {
   /** f(θ); remembers zᵢ for the gradient at the same θ. */
-  evaluate(theta: Float64Array): number;
+  evaluate(theta: Float64Array): ProductSolver<number>;
   /** ∇f at the θ last given to evaluate; also fixes the Dᵢ used by the Hessian products. */
-  gradient(theta: Float64Array, out: Float64Array): void;
+  gradient(theta: Float64Array, out: Float64Array): ProductSolver<void>;
   /** out = ∇²f · v at the θ of the last gradient call. */
-  multiplyHessian(v: Float64Array, out: Float64Array): void;
+  multiplyHessian(v: Float64Array, out: Float64Array): ProductSolver<void>;
   /** Diagonal of ∇²f (for the preconditioner). */
-  diagonalHessian(out: Float64Array): void;
+  diagonalHessian(out: Float64Array): ProductSolver<void>;
 }
 
 /** Numerically safe log(1 + exp(−t)). */
@@ -47,15 +50,15 @@ export function createLogisticLoss(problem: BinaryProblem): LogisticLoss {
   const u = new Float64Array(l);
 
   return {
-    evaluate(theta) {
-      multiplyRows(x, theta, theta[n], z);
+    *evaluate(theta) {
+      yield { kind: "rows", v: theta, out: z };
       let f = 0;
       for (let j = 0; j < n; j++) f += theta[j] * theta[j];
       f *= 0.5;
       for (let i = 0; i < l; i++) f += cost[i] * logOnePlusExpNeg(y[i] * z[i]);
       return f;
     },
-    gradient(theta, out) {
+    *gradient(theta, out) {
       let biasGrad = 0;
       for (let i = 0; i < l; i++) {
         const s = sigmoid(y[i] * z[i]);
@@ -64,29 +67,25 @@ export function createLogisticLoss(problem: BinaryProblem): LogisticLoss {
         biasGrad += u[i];
       }
       for (let j = 0; j < n; j++) out[j] = theta[j];
-      addTransposedProduct(x, u, out);
+      yield { kind: "columns", u, out };
       out[n] = biasGrad;
     },
-    multiplyHessian(v, out) {
-      multiplyRows(x, v, v[n], u);
+    *multiplyHessian(v, out) {
+      yield { kind: "rows", v, out: u };
       let biasOut = 0;
       for (let i = 0; i < l; i++) {
         u[i] *= d[i];
         biasOut += u[i];
       }
       for (let j = 0; j < n; j++) out[j] = v[j];
-      addTransposedProduct(x, u, out);
+      yield { kind: "columns", u, out };
       out[n] = biasOut;
     },
-    diagonalHessian(out) {
-      const { indptr, indices, data } = x;
+    *diagonalHessian(out) {
       out.fill(1, 0, n);
       let bias = 0;
-      for (let i = 0; i < l; i++) {
-        const di = d[i];
-        bias += di;
-        for (let k = indptr[i]; k < indptr[i + 1]; k++) out[indices[k]] += di * data[k] * data[k];
-      }
+      for (let i = 0; i < l; i++) bias += d[i];
+      yield { kind: "squares", u: d, out };
       out[n] = bias;
     },
   };

@@ -24,7 +24,8 @@
 // model's relative decrease per step is small (the rule in recent liblinear tron.cpp, recalled
 // from memory, not copied).
 import { multiplyRows, type CsrMatrix } from "./csr";
-import { createLogisticLoss, sigmoid, type BinaryProblem } from "./logistic-loss";
+import { solveAlone, solveTogether, type ProductSolver } from "./lockstep";
+import { createLogisticLoss, sigmoid } from "./logistic-loss";
 import { computeNorm, minimiseTrustRegion } from "./tron";
 
 export interface LogisticOptions {
@@ -56,19 +57,23 @@ export function checkLogisticOptions(o: LogisticOptions): void {
   }
 }
 
-/** Fits one binary model: `positive[i]` is 1 when row i belongs to the class. */
-export function trainBinaryLogistic(
+/** Checks one binary problem and returns its solver (a generator of sparse products). */
+export function createBinarySolver(
   x: CsrMatrix,
   positive: Uint8Array,
   options: LogisticOptions = DEFAULT_LOGISTIC_OPTIONS,
-): BinaryModel {
+): ProductSolver<BinaryModel> {
   checkLogisticOptions(options);
   if (positive.length !== x.rows) throw new Error("There must be one label per row.");
   let pos = 0;
   for (let i = 0; i < positive.length; i++) pos += positive[i];
   const neg = x.rows - pos;
   if (pos === 0 || neg === 0) throw new Error("A binary model needs rows of both sides; this class has only one.");
+  return solveBinary(x, positive, pos, options);
+}
 
+function* solveBinary(x: CsrMatrix, positive: Uint8Array, pos: number, options: LogisticOptions): ProductSolver<BinaryModel> {
+  const neg = x.rows - pos;
   const y = new Float64Array(x.rows);
   const cost = new Float64Array(x.rows);
   const posWeight = options.balanced ? x.rows / (2 * pos) : 1;
@@ -77,27 +82,37 @@ export function trainBinaryLogistic(
     y[i] = positive[i] ? 1 : -1;
     cost[i] = options.C * (positive[i] ? posWeight : negWeight);
   }
-  const problem: BinaryProblem = { x, y, cost };
-  const loss = createLogisticLoss(problem);
+  const loss = createLogisticLoss({ x, y, cost });
   const n = x.cols;
 
   const theta = new Float64Array(n + 1);
   const grad = new Float64Array(n + 1);
-  loss.evaluate(theta);
-  loss.gradient(theta, grad);
+  yield* loss.evaluate(theta);
+  yield* loss.gradient(theta, grad);
   const gradNormAtZero = computeNorm(grad);
   // Start from the best intercept-only model: fewer Newton steps for rare classes.
   theta[n] = Math.log((pos * posWeight) / (neg * negWeight));
   const target = (options.tolerance * Math.max(Math.min(pos, neg), 1)) / x.rows * gradNormAtZero;
-  const result = minimiseTrustRegion(loss, theta, target, options.maxIterations);
+  const result = yield* minimiseTrustRegion(loss, theta, target, options.maxIterations);
   return { weights: theta.slice(0, n), intercept: theta[n], iterations: result.iterations, converged: result.converged };
 }
 
-/** Fits class k against all other classes (one-vs-rest), given each row's class index. */
-export function trainClassAgainstRest(x: CsrMatrix, labelIds: Int32Array, k: number, options: LogisticOptions): BinaryModel {
-  const positive = new Uint8Array(labelIds.length);
-  for (let i = 0; i < labelIds.length; i++) positive[i] = labelIds[i] === k ? 1 : 0;
-  return trainBinaryLogistic(x, positive, options);
+/** Fits one binary model: `positive[i]` is 1 when row i belongs to the class. */
+export function trainBinaryLogistic(x: CsrMatrix, positive: Uint8Array, options: LogisticOptions = DEFAULT_LOGISTIC_OPTIONS): BinaryModel {
+  return solveAlone(x, createBinarySolver(x, positive, options));
+}
+
+/**
+ * Fits each class in `classIds` against all other classes (one-vs-rest), given each row's class
+ * index, in lockstep so that every pass over the matrix serves all of them.
+ */
+export function trainClassesAgainstRest(x: CsrMatrix, labelIds: Int32Array, classIds: number[], options: LogisticOptions): BinaryModel[] {
+  const solvers = classIds.map((k) => {
+    const positive = new Uint8Array(labelIds.length);
+    for (let i = 0; i < labelIds.length; i++) positive[i] = labelIds[i] === k ? 1 : 0;
+    return createBinarySolver(x, positive, options);
+  });
+  return solveTogether(x, solvers);
 }
 
 /** σ(w·xᵢ + b) for every row. */

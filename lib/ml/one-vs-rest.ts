@@ -1,11 +1,12 @@
 // One-vs-rest wrapper (DESIGN.md §5): one binary logistic model per class, class k against all
-// others, trained on worker threads when asked for more than one thread. Workers share the
-// matrix through SharedArrayBuffers and pull the next class when done with one, so a few slow
-// classes do not leave a thread idle. `threads: 1` (or workers failing to start, as inside a
-// bundler that cannot load the worker file) trains in this thread with the same code.
+// others. The classes of a thread are trained in lockstep (lockstep.ts), so each pass over the
+// matrix serves all of them; with more than one thread the classes are dealt round-robin to
+// worker threads that share the matrix through SharedArrayBuffers. `threads: 1` (or workers
+// failing to start, as inside a bundler that cannot load the worker file) trains in this thread
+// with the same code and gets bit-identical weights.
 import { availableParallelism } from "node:os";
 import { assertFiniteCsr, type CsrMatrix } from "./csr";
-import { checkLogisticOptions, trainClassAgainstRest, type LogisticOptions } from "./logistic";
+import { checkLogisticOptions, trainClassesAgainstRest, type LogisticOptions } from "./logistic";
 import { runClassWorkers, type ClassResult } from "./ovr-pool";
 
 export interface OneVsRestOptions extends LogisticOptions {
@@ -44,10 +45,9 @@ function checkLabels(x: CsrMatrix, labelIds: Int32Array, classCount: number): vo
   if (missing >= 0) throw new Error(`Class ${missing} has no rows; drop it or add documents.`);
 }
 
-/** Fits one binary model for class k in this thread. */
-function trainClass(x: CsrMatrix, labelIds: Int32Array, k: number, options: LogisticOptions): ClassResult {
-  const m = trainClassAgainstRest(x, labelIds, k, options);
-  return { classId: k, weights: m.weights, intercept: m.intercept, iterations: m.iterations, converged: m.converged };
+/** Fits the binary models of the given classes in this thread. */
+function trainClasses(x: CsrMatrix, labelIds: Int32Array, classIds: number[], options: LogisticOptions): ClassResult[] {
+  return trainClassesAgainstRest(x, labelIds, classIds, options).map((m, a) => ({ classId: classIds[a], ...m }));
 }
 
 /** Trains all classes; x rows are documents, labelIds[i] the class index of row i. */
@@ -68,8 +68,7 @@ export async function trainOneVsRest(
     if (results !== null) threadsUsed = threads;
   }
   if (results === null) {
-    results = [];
-    for (let k = 0; k < classCount; k++) results.push(trainClass(x, labelIds, k, options));
+    results = trainClasses(x, labelIds, Array.from({ length: classCount }, (_, k) => k), options);
   }
   return collectModel(results, x.cols, classCount, threadsUsed);
 }

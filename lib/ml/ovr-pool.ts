@@ -1,5 +1,7 @@
 // Runs one-vs-rest classes on worker threads. The matrix and labels are copied once into
-// SharedArrayBuffers; each worker asks for a class, trains it and sends the weights back.
+// SharedArrayBuffers; the classes are dealt round-robin, one share per worker, and each worker
+// trains its share in lockstep and sends the weights back. (A shared queue of single classes
+// would balance better but would lose the lockstep passes, which matter more.)
 // The worker starts from a plain .mjs entry that loads the TypeScript worker through tsx's API:
 // Node.js 20 does not pass the parent's loader hooks to workers, and this way the same file works
 // under the tsx CLI, vitest and plain node. Any failure rejects, and the caller then trains in
@@ -56,7 +58,6 @@ export function runClassWorkers(
   return new Promise((resolve, reject) => {
     const results: ClassResult[] = [];
     const workers: Worker[] = [];
-    let next = 0;
     let failed = false;
     const fail = (err: unknown) => {
       if (failed) return;
@@ -66,9 +67,12 @@ export function runClassWorkers(
     };
     const url = new URL("./ovr-worker-entry.mjs", import.meta.url);
     for (let t = 0; t < threads; t++) {
+      const share = Array.from({ length: classCount }, (_, k) => k).filter((k) => k % threads === t);
       let worker: Worker;
       try {
-        worker = new Worker(url, { workerData: shared });
+        // execArgv []: the worker need not repeat the parent's loader flags (tsx's would start a
+        // second loader); the entry file registers what it needs.
+        worker = new Worker(url, { workerData: shared, execArgv: [] });
       } catch (err) {
         fail(err);
         return;
@@ -77,14 +81,15 @@ export function runClassWorkers(
       worker.on("message", (msg: WorkerMessage) => {
         if (failed) return;
         if (msg.type === "error") return fail(new Error(msg.message));
-        if (msg.type === "result") results.push(msg);
+        if (msg.type === "ready") {
+          worker.postMessage({ classIds: share });
+          return;
+        }
+        results.push(msg);
         if (results.length === classCount) {
           for (const w of workers) void w.terminate();
           resolve(results);
-          return;
         }
-        if (next < classCount) worker.postMessage({ classId: next++ });
-        else worker.postMessage({ classId: -1 });
       });
       worker.on("error", fail);
       worker.on("exit", (code) => {

@@ -1,7 +1,8 @@
-// Worker side of ovr-pool.ts: trains the classes the main thread hands out, one at a time.
+// Worker side of ovr-pool.ts: trains its share of the classes in lockstep, posts each class's
+// weights, then closes.
 import { parentPort, workerData } from "node:worker_threads";
 import type { CsrMatrix } from "./csr";
-import { trainClassAgainstRest } from "./logistic";
+import { trainClassesAgainstRest } from "./logistic";
 import type { SharedProblem } from "./ovr-pool";
 
 const problem = workerData as SharedProblem;
@@ -13,24 +14,23 @@ const x: CsrMatrix = {
   data: problem.data,
 };
 
-/** Trains class k against the rest and posts the weights (transferred, not copied). */
-function trainAndPost(k: number): void {
-  const m = trainClassAgainstRest(x, problem.labelIds, k, problem.options);
-  parentPort!.postMessage(
-    { type: "result", classId: k, weights: m.weights, intercept: m.intercept, iterations: m.iterations, converged: m.converged },
-    [m.weights.buffer as ArrayBuffer],
-  );
+/** Trains the classes and posts their weights (transferred, not copied). */
+function trainAndPost(classIds: number[]): void {
+  const models = trainClassesAgainstRest(x, problem.labelIds, classIds, problem.options);
+  models.forEach((m, a) => {
+    parentPort!.postMessage(
+      { type: "result", classId: classIds[a], weights: m.weights, intercept: m.intercept, iterations: m.iterations, converged: m.converged },
+      [m.weights.buffer as ArrayBuffer],
+    );
+  });
 }
 
-parentPort!.on("message", (msg: { classId: number }) => {
-  if (msg.classId < 0) {
-    parentPort!.close();
-    return;
-  }
+parentPort!.once("message", (msg: { classIds: number[] }) => {
   try {
-    trainAndPost(msg.classId);
+    trainAndPost(msg.classIds);
   } catch (err) {
     parentPort!.postMessage({ type: "error", message: err instanceof Error ? err.message : String(err) });
   }
+  parentPort!.close();
 });
 parentPort!.postMessage({ type: "ready" });

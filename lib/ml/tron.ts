@@ -8,6 +8,9 @@
 // Sources: Lin, Weng & Keerthi, JMLR 9 (2008), Algorithm 2 and the radius rules of §2.2;
 // Hsia, Chiang & Lin, ACML 2018, for the preconditioner; the inner stopping rule on the quadratic
 // model's decrease follows recent liblinear releases (recalled from memory).
+// It is a generator: every sparse product is yielded (see lockstep.ts), so one pass over the
+// matrix can serve the solvers of many classes at once.
+import type { ProductSolver } from "./lockstep";
 import type { LogisticLoss } from "./logistic-loss";
 
 const ETA0 = 1e-4;
@@ -57,14 +60,14 @@ interface CgScratch {
  * The dense vector updates are fused into few loops: on office-sized data they cost as much as
  * the sparse passes. `inv` holds 1/M.
  */
-function solveTrustRegionStep(
+function* solveTrustRegionStep(
   loss: LogisticLoss,
   g: Float64Array,
   m: Float64Array,
   inv: Float64Array,
   delta: number,
   w: CgScratch,
-): boolean {
+): ProductSolver<boolean> {
   const { s, r, z, d, hd } = w;
   const n = g.length;
   let zr = 0;
@@ -78,7 +81,7 @@ function solveTrustRegionStep(
   let q = 0;
   const dsq = delta * delta;
   for (let iter = 1; iter <= n; iter++) {
-    loss.multiplyHessian(d, hd);
+    yield* loss.multiplyHessian(d, hd);
     const dHd = dot(d, hd);
     if (!(dHd > 0)) return false;
     const alpha = zr / dHd;
@@ -134,8 +137,8 @@ function moveToBoundary(w: CgScratch, m: Float64Array, alpha: number, dsq: numbe
 }
 
 /** Refreshes the preconditioner from the Hessian diagonal at the current point. */
-function updatePreconditioner(loss: LogisticLoss, m: Float64Array, inv: Float64Array): void {
-  loss.diagonalHessian(m);
+function* updatePreconditioner(loss: LogisticLoss, m: Float64Array, inv: Float64Array): ProductSolver<void> {
+  yield* loss.diagonalHessian(m);
   for (let i = 0; i < m.length; i++) {
     m[i] = 1 - PRECONDITIONER_MIX + PRECONDITIONER_MIX * m[i];
     inv[i] = 1 / m[i];
@@ -143,12 +146,12 @@ function updatePreconditioner(loss: LogisticLoss, m: Float64Array, inv: Float64A
 }
 
 /** Minimises loss starting from theta (updated in place) until ‖∇f‖ ≤ target. */
-export function minimiseTrustRegion(
+export function* minimiseTrustRegion(
   loss: LogisticLoss,
   theta: Float64Array,
   target: number,
   maxIterations: number,
-): TrustRegionResult {
+): ProductSolver<TrustRegionResult> {
   const n = theta.length;
   const g = new Float64Array(n);
   const m = new Float64Array(n);
@@ -161,21 +164,21 @@ export function minimiseTrustRegion(
     d: new Float64Array(n),
     hd: new Float64Array(n),
   };
-  let f = loss.evaluate(theta);
-  loss.gradient(theta, g);
+  let f = yield* loss.evaluate(theta);
+  yield* loss.gradient(theta, g);
   if (computeNorm(g) <= target) return { iterations: 0, converged: true };
-  updatePreconditioner(loss, m, inv);
+  yield* updatePreconditioner(loss, m, inv);
   let delta = Math.sqrt(dotScaled(g, inv, g));
   let iterations = 0;
   let firstStep = true;
 
   while (iterations < maxIterations) {
-    const reachedBoundary = solveTrustRegionStep(loss, g, m, inv, delta, scratch);
+    const reachedBoundary = yield* solveTrustRegionStep(loss, g, m, inv, delta, scratch);
     const { s, r } = scratch;
     for (let i = 0; i < n; i++) next[i] = theta[i] + s[i];
     const gs = dot(g, s);
     const predicted = -0.5 * (gs - dot(s, r));
-    const fNew = loss.evaluate(next);
+    const fNew = yield* loss.evaluate(next);
     const actual = f - fNew;
     const sNorm = Math.sqrt(dotScaled(s, m, s));
     if (firstStep) delta = Math.min(delta, sNorm);
@@ -192,9 +195,9 @@ export function minimiseTrustRegion(
       iterations++;
       theta.set(next);
       f = fNew;
-      loss.gradient(theta, g);
+      yield* loss.gradient(theta, g);
       if (computeNorm(g) <= target) return { iterations, converged: true };
-      updatePreconditioner(loss, m, inv);
+      yield* updatePreconditioner(loss, m, inv);
     }
     // A rejected step needs no restore: Hessian products use the Dᵢ fixed by the last gradient.
     if (Math.abs(actual) <= 0 && predicted <= 0) break;

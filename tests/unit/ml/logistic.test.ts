@@ -4,7 +4,8 @@ import MlLogisticRegression from "ml-logistic-regression";
 import { Matrix } from "ml-matrix";
 import { buildCsrFromDense } from "@/lib/ml/csr";
 import { createLogisticLoss } from "@/lib/ml/logistic-loss";
-import { trainBinaryLogistic, predictBinaryProbabilities } from "@/lib/ml/logistic";
+import { solveAlone } from "@/lib/ml/lockstep";
+import { trainBinaryLogistic, trainClassesAgainstRest, predictBinaryProbabilities } from "@/lib/ml/logistic";
 import { trainOneVsRest } from "@/lib/ml/one-vs-rest";
 import { exportCsr, runPythonReference } from "@/lib/ml/reference/export";
 import { requireSklearn } from "./helpers";
@@ -24,17 +25,56 @@ describe("binary logistic loss", () => {
     const loss = createLogisticLoss({ x, y: Float64Array.from([1, -1, 1, -1]), cost: Float64Array.from([2, 2, 3, 3]) });
     const theta = Float64Array.from([0.3, -0.2, 0.1, 0.4]);
     const g = new Float64Array(4);
-    loss.evaluate(theta);
-    loss.gradient(theta, g);
+    solveAlone(x, loss.evaluate(theta));
+    solveAlone(x, loss.gradient(theta, g));
     for (let j = 0; j < 4; j++) {
       const h = 1e-6;
       const up = theta.slice();
       up[j] += h;
       const down = theta.slice();
       down[j] -= h;
-      const numeric = (loss.evaluate(up) - loss.evaluate(down)) / (2 * h);
+      const numeric = (solveAlone(x, loss.evaluate(up)) - solveAlone(x, loss.evaluate(down))) / (2 * h);
       expect(Math.abs(numeric - g[j])).toBeLessThan(1e-6);
     }
+  });
+
+  it("has the Hessian products and diagonal that finite differences of the gradient say", () => {
+    const x = buildCsrFromDense([[1, 0, 2], [0, 1, -1], [3, 1, 0], [0.5, -2, 1]]);
+    const loss = createLogisticLoss({ x, y: Float64Array.from([1, -1, 1, -1]), cost: Float64Array.from([2, 2, 3, 3]) });
+    const gradientAt = (theta: Float64Array) => {
+      const g = new Float64Array(4);
+      solveAlone(x, loss.evaluate(theta));
+      solveAlone(x, loss.gradient(theta, g));
+      return g;
+    };
+    const theta = Float64Array.from([0.3, -0.2, 0.1, 0.4]);
+    const v = Float64Array.from([0.7, -1.1, 0.5, 0.9]);
+    const h = 1e-6;
+    const up = gradientAt(theta.map((t, j) => t + h * v[j]));
+    const down = gradientAt(theta.map((t, j) => t - h * v[j]));
+    gradientAt(theta);
+    const hv = new Float64Array(4);
+    solveAlone(x, loss.multiplyHessian(v, hv));
+    const diagonal = new Float64Array(4);
+    solveAlone(x, loss.diagonalHessian(diagonal));
+    for (let j = 0; j < 4; j++) {
+      expect(Math.abs((up[j] - down[j]) / (2 * h) - hv[j])).toBeLessThan(1e-6);
+      const e = new Float64Array(4);
+      e[j] = 1;
+      const column = new Float64Array(4);
+      solveAlone(x, loss.multiplyHessian(e, column));
+      expect(Math.abs(column[j] - diagonal[j])).toBeLessThan(1e-12);
+    }
+  });
+
+  it("gives a class the same weights whether trained alone or in lockstep with others", () => {
+    const x = buildCsrFromDense([[1, 0, 2], [0, 1, -1], [3, 1, 0], [0.5, -2, 1], [1, 1, 1], [0, 0, 3]]);
+    const labels = Int32Array.from([0, 1, 2, 0, 1, 2]);
+    const options = { C: 3, tolerance: 1e-8, maxIterations: 100, balanced: false };
+    const together = trainClassesAgainstRest(x, labels, [0, 1, 2], options);
+    const alone = trainBinaryLogistic(x, Uint8Array.from(labels, (l) => (l === 1 ? 1 : 0)), options);
+    expect(Array.from(together[1].weights)).toEqual(Array.from(alone.weights));
+    expect(together[1].intercept).toBe(alone.intercept);
   });
 
   it("rejects a class without rows of both sides and NaN input", async () => {
