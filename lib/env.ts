@@ -70,6 +70,11 @@ export const env = {
     timeLimitMs: int("READ_TIME_LIMIT_SECONDS", 120) * 1000,
     maxPages: int("READ_MAX_PAGES", 500),
   },
+  retrain: {
+    /** Cron expression of the nightly retraining; empty turns it off. */
+    cron: text("RETRAIN_CRON", "0 2 * * *"),
+    timeZone: text("OFFICE_TIME_ZONE", "UTC"),
+  },
   jobs: {
     /** Run background workers inside this process (off for a web-only instance). */
     enabled: bool("JOBS_ENABLED", true),

@@ -1,7 +1,8 @@
 import "server-only";
 // Stores what the reading job found, in one transaction with the job's completion.
 import { getDb } from "@/db";
-import { completeJob } from "@/lib/data/jobs";
+import { completeJob, enqueueJob } from "@/lib/data/jobs";
+import { SUGGEST_JOB } from "@/lib/jobs/kinds";
 import type { ReadOutcome, SensitiveCounts } from "@/lib/intake";
 
 export interface DocumentToRead {
@@ -42,6 +43,7 @@ export async function saveReading(
         unreadable_code: null,
         unreadable_reason: null,
       });
+      await enqueueJob(SUGGEST_JOB, documentId, null, trx);
     } else {
       await trx("documents").where({ id: documentId }).update({
         ...common,

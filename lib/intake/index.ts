@@ -2,7 +2,7 @@
 // `sniffFile`, `cleanFileName` and `sha256Hex`; the reading job calls `readDocument` and the
 // sensitive-identifier functions; server shutdown calls `shutdownOcr`.
 export { cleanFileName } from "./clean-file-name";
-export { ACCEPTED_KINDS } from "./file-kinds";
+export { ACCEPTED_KINDS, findKindByMediaType } from "./file-kinds";
 export { sha256Hex } from "./hash";
 export { shutdownOcr } from "./ocr-engine";
 export { Deadline } from "./deadline";

@@ -9,7 +9,7 @@ if (!workers) {
   console.error("JOBS_ENABLED is off: this worker has nothing to do.");
   process.exit(2);
 }
-console.log(`[jobs] worker ${workers.workerId} started`);
+console.log(`[jobs] workers ${workers.documents.workerId} (documents) and ${workers.training.workerId} (training) started`);
 const stop = async () => {
   await stopBackgroundWork();
   await shutdownOcr();

@@ -112,7 +112,7 @@ async function main(): Promise<void> {
     const t0 = performance.now();
     for (const [i, s] of samples.entries()) {
       const form = new FormData();
-      form.append("file", new Blob([s.bytes]), s.name);
+      form.append("file", new Blob([new Uint8Array(s.bytes)]), s.name);
       const started = performance.now();
       const res = await fetch(`${url}/api/documents`, { method: "POST", headers: { cookie }, body: form });
       await res.arrayBuffer();

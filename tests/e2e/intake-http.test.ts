@@ -15,7 +15,7 @@ let clerk: Client;
 
 async function upload(name: string, bytes: Uint8Array, type = "application/octet-stream") {
   const form = new FormData();
-  form.append("file", new Blob([bytes], { type }), name);
+  form.append("file", new Blob([new Uint8Array(bytes)], { type }), name);
   const res = await clerk.request("POST", "/api/documents", form);
   return { status: res.status, body: await res.json() };
 }

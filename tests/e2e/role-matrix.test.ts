@@ -53,7 +53,7 @@ const fixtures = { open: 0, walled: 0 };
 
 async function uploadAsAdmin(label: string): Promise<number> {
   const form = new FormData();
-  form.append("file", new Blob([await makeTextPdf([[`Matrix fixture ${label} ${Date.now()}`]])], { type: "application/pdf" }), `${label}.pdf`);
+  form.append("file", new Blob([new Uint8Array(await makeTextPdf([[`Matrix fixture ${label} ${Date.now()}`]]))], { type: "application/pdf" }), `${label}.pdf`);
   const res = await clients.admin.request("POST", "/api/documents", form);
   const body = await res.json();
   if (res.status !== 201) throw new Error(`fixture upload answered ${res.status}: ${JSON.stringify(body)}`);

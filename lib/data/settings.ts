@@ -1,0 +1,25 @@
+import "server-only";
+import { getDb } from "@/db";
+import type { CurrentUser } from "@/lib/data/users";
+
+export interface OfficeSettings {
+  autoFileEnabled: boolean;
+  /** Cross-validated precision the auto-file bar must reach, e.g. 0.98. */
+  autoFileTarget: number;
+  /** A cabinet type with fewer human-filed examples than this ranks by its description. */
+  minExamplesPerType: number;
+}
+
+export async function getOfficeSettings(): Promise<OfficeSettings> {
+  const r = await getDb()("office_settings").where({ id: 1 }).first();
+  return { autoFileEnabled: Boolean(r.auto_file_enabled), autoFileTarget: Number(r.auto_file_target), minExamplesPerType: r.min_examples_per_type };
+}
+
+export async function updateOfficeSettings(user: CurrentUser, patch: Partial<OfficeSettings>): Promise<OfficeSettings> {
+  const update: Record<string, unknown> = { updated_by: user.id, updated_at: new Date() };
+  if (patch.autoFileEnabled !== undefined) update.auto_file_enabled = patch.autoFileEnabled;
+  if (patch.autoFileTarget !== undefined) update.auto_file_target = patch.autoFileTarget;
+  if (patch.minExamplesPerType !== undefined) update.min_examples_per_type = patch.minExamplesPerType;
+  await getDb()("office_settings").where({ id: 1 }).update(update);
+  return getOfficeSettings();
+}

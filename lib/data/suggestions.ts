@@ -1,0 +1,103 @@
+import "server-only";
+// Storing a suggestion, its "suggested" record, and an auto-filing when the office allows it.
+import type { Knex } from "knex";
+import { getDb } from "@/db";
+import { completeJob } from "@/lib/data/jobs";
+
+export interface RankedType {
+  cabinetTypeId: number;
+  confidence: number;
+  probability: number | null;
+  source: "model" | "description";
+}
+
+export interface MatterCandidate {
+  matterId: number;
+  score: number;
+  reasons: string[];
+}
+
+export interface NewSuggestion {
+  documentId: number;
+  modelVersionId: number | null;
+  method: "model" | "cold_start" | "blended";
+  ranked: RankedType[];
+  noConfidentMatch: boolean;
+  why: { term: string; weight: number }[];
+  matterCandidates: MatterCandidate[];
+  topMatterId: number | null;
+  matterAmbiguous: boolean;
+  autoFile: boolean;
+}
+
+export interface DocumentForSuggestion {
+  id: number;
+  text: string | null;
+  original_name: string;
+  media_type: string;
+  page_count: number | null;
+  ocr_used: number;
+  status: string;
+  filed_at: Date | null;
+}
+
+export async function findDocumentForSuggestion(id: number): Promise<DocumentForSuggestion | undefined> {
+  return getDb()("documents").where({ id }).first("id", "text", "original_name", "media_type", "page_count", "ocr_used", "status", "filed_at");
+}
+
+async function insertSuggestion(trx: Knex.Transaction, s: NewSuggestion): Promise<void> {
+  const top = s.ranked[0];
+  await trx("suggestions").insert({
+    document_id: s.documentId,
+    model_version_id: s.modelVersionId,
+    method: s.method,
+    ranked: JSON.stringify(s.ranked),
+    top_cabinet_type_id: top?.cabinetTypeId ?? null,
+    top_confidence: top?.confidence ?? null,
+    no_confident_match: s.noConfidentMatch,
+    why: JSON.stringify(s.why),
+    matter_candidates: JSON.stringify(s.matterCandidates),
+    top_matter_id: s.topMatterId,
+    matter_ambiguous: s.matterAmbiguous,
+  });
+  await trx("filing_events").insert({
+    document_id: s.documentId,
+    user_id: null,
+    action: "suggested",
+    to_cabinet_type_id: top?.cabinetTypeId ?? null,
+    to_matter_id: s.topMatterId,
+    model_version_id: s.modelVersionId,
+    confidence: top?.confidence ?? null,
+    reason: s.method === "model" ? "Suggested by the model." : s.method === "blended" ? "Suggested by the model; some cabinet types ranked by their descriptions (too few examples yet)." : "Ranked by the cabinet types' descriptions and keywords: no model yet.",
+  });
+  if (s.autoFile && top && s.topMatterId) {
+    const n = await trx("documents").where({ id: s.documentId }).whereNull("filed_at").update({
+      cabinet_type_id: top.cabinetTypeId,
+      matter_id: s.topMatterId,
+      filed_at: trx.fn.now(),
+      filed_how: "auto",
+      filed_by: null,
+    });
+    if (n === 1) {
+      await trx("filing_events").insert({
+        document_id: s.documentId,
+        user_id: null,
+        action: "auto_filed",
+        to_cabinet_type_id: top.cabinetTypeId,
+        to_matter_id: s.topMatterId,
+        model_version_id: s.modelVersionId,
+        confidence: top.confidence,
+        reason: "Confidence passed the office's auto-file bar; waiting in the spot-check list.",
+      });
+    }
+  }
+}
+
+/** Saves the suggestion with the job's completion; nothing is written if the job is no longer ours. */
+export async function saveSuggestion(jobId: number | null, workerId: string | null, s: NewSuggestion): Promise<boolean> {
+  return getDb().transaction(async (trx) => {
+    if (jobId !== null && !(await completeJob(trx, jobId, workerId!))) return false;
+    await insertSuggestion(trx, s);
+    return true;
+  });
+}

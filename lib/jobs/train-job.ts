@@ -1,0 +1,19 @@
+// The "train" job: runs one model version's training (see lib/learning/retrain.ts).
+import { getDb } from "@/db";
+import { completeJob } from "@/lib/data/jobs";
+import { updateModelVersion } from "@/lib/data/models";
+import { runTraining } from "@/lib/learning/retrain";
+import type { JobHandler } from "@/lib/jobs/worker";
+
+export const trainJob: JobHandler = {
+  async run(job, workerId) {
+    const { versionId } = (typeof job.payload === "string" ? JSON.parse(job.payload) : job.payload) as { versionId: number };
+    const ran = await runTraining(versionId);
+    if (!ran) throw new Error("Another server is training now; this run waits its turn.");
+    await getDb().transaction((trx) => completeJob(trx, job.id, workerId));
+  },
+  async giveUp(job, error) {
+    const { versionId } = (typeof job.payload === "string" ? JSON.parse(job.payload) : job.payload) as { versionId: number };
+    await updateModelVersion(versionId, { status: "failed", progress: null, finished_at: new Date(), reason: `Training could not run: ${error}`.slice(0, 600) });
+  },
+};

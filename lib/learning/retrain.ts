@@ -1,0 +1,133 @@
+// Retraining: one model version per run. Holds the MariaDB named lock `foldwright_retrain` so
+// only one server trains at a time; trains on human-confirmed filings; cross-validates; stores
+// the artifact in the bucket; promotes the candidate only if its macro-F1 is not more than one
+// point below the current model's settings on the same folds. A failed run leaves the current
+// model serving (promotion is the only step that changes which version is current).
+import { getDb } from "@/db";
+import { enqueueJob } from "@/lib/data/jobs";
+import { withNamedLock } from "@/lib/data/locks";
+import { findCurrentModelParams, promoteModelVersion, updateModelVersion } from "@/lib/data/models";
+import { getOfficeSettings } from "@/lib/data/settings";
+import { loadTrainingSet, type TrainingRow } from "@/lib/data/training-set";
+import { saveModel, trainModel, type TrainOptionsInput } from "@/lib/ml";
+import { putObject } from "@/storage/s3";
+import { chooseFolds, scoreOnFolds } from "@/lib/learning/evaluate-candidate";
+import { TRAIN_JOB } from "@/lib/jobs/kinds";
+
+export const PROMOTION_MARGIN = 0.01; // "not more than one point lower" (DESIGN §5)
+/** Training settings of new versions; threads 1 keeps a web server's second core free. */
+export const DEFAULT_PARAMS: TrainOptionsInput = { C: 30, threads: 1 };
+
+export type RetrainRequest = { status: "queued"; versionId: number } | { status: "busy"; versionId: number };
+
+/** Creates a version in "training" and queues its job, unless a run is already under way. */
+export async function requestRetrain(trigger: "nightly" | "manual" | "start", userId: number | null): Promise<RetrainRequest> {
+  const result = await withNamedLock("foldwright_retrain_request", 10, async () => {
+    const busy = await getDb()("model_versions").where({ status: "training" }).first("id");
+    if (busy) return { status: "busy" as const, versionId: busy.id as number };
+    const versionId = await getDb().transaction(async (trx) => {
+      const [id] = await trx("model_versions").insert({ trigger, requested_by: userId, status: "training", progress: "Waiting for a worker" });
+      await enqueueJob(TRAIN_JOB, null, { versionId: id }, trx);
+      return id as number;
+    });
+    return { status: "queued" as const, versionId };
+  });
+  if (!result) throw new Error("Could not take the retraining request lock within 10 s.");
+  return result;
+}
+
+export interface TrainingHooks {
+  /** Tests only: changes the labels the candidate learns from (e.g. shuffles them). */
+  transformLabels?: (labels: string[]) => string[];
+}
+
+function eligible(rows: TrainingRow[], minExamples: number): TrainingRow[] {
+  const counts = new Map<string, number>();
+  for (const r of rows) counts.set(r.label, (counts.get(r.label) ?? 0) + 1);
+  return rows.filter((r) => counts.get(r.label)! >= minExamples);
+}
+
+/** Runs one version's training; returns false when another server holds the training lock. */
+export async function runTraining(versionId: number, hooks: TrainingHooks = {}): Promise<boolean> {
+  const ran = await withNamedLock("foldwright_retrain", 0, async () => {
+    const started = Date.now();
+    const progress = (text: string) => updateModelVersion(versionId, { progress: text });
+    try {
+      await progress("Gathering human-filed documents");
+      const settings = await getOfficeSettings();
+      const rows = eligible(await loadTrainingSet(), settings.minExamplesPerType);
+      const labels = hooks.transformLabels ? hooks.transformLabels(rows.map((r) => r.label)) : rows.map((r) => r.label);
+      const docs = rows.map((r, i) => ({ text: r.text, filename: r.filename, meta: r.meta, label: labels[i] }));
+      const classes = [...new Set(labels)];
+      if (classes.length < 2) {
+        throw new Error(`Too few filed documents to train: at least two cabinet types need ${settings.minExamplesPerType} human-filed documents each (found ${classes.length}).`);
+      }
+      const folds = chooseFolds(labels);
+      await progress(`Cross-validating on ${docs.length} documents (${folds} folds)`);
+      const report = await scoreOnFolds(docs, folds, DEFAULT_PARAMS, settings.autoFileTarget);
+
+      const current = await findCurrentModelParams();
+      let compared: number | null = null;
+      if (current) {
+        const sameSettings = JSON.stringify(current.params) === JSON.stringify(DEFAULT_PARAMS) && !hooks.transformLabels;
+        if (sameSettings) compared = report.macroF1;
+        else {
+          await progress("Scoring the current model's settings on the same folds");
+          const truth = rows.map((r) => ({ text: r.text, filename: r.filename, meta: r.meta, label: r.label }));
+          compared = (await scoreOnFolds(truth, folds, current.params as TrainOptionsInput, settings.autoFileTarget)).macroF1;
+        }
+      }
+
+      await progress("Training on all documents");
+      const model = await trainModel(docs, DEFAULT_PARAMS);
+      model.metrics = report;
+      const bytes = saveModel(model);
+      const key = `models/version-${versionId}-${Date.now()}.bin`;
+      await progress("Storing the model");
+      await putObject(key, Buffer.from(bytes), { contentType: "application/octet-stream", metadata: { "model-version": String(versionId) } });
+
+      const counts: Record<string, number> = {};
+      for (const l of labels) counts[l] = (counts[l] ?? 0) + 1;
+      await updateModelVersion(versionId, {
+        status: "candidate",
+        params: JSON.stringify(DEFAULT_PARAMS),
+        class_list: JSON.stringify(model.classes.map(Number)),
+        class_counts: JSON.stringify(counts),
+        vocabulary_size: model.terms.length,
+        train_count: docs.length,
+        metrics: JSON.stringify(report),
+        macro_f1: report.macroF1,
+        accuracy: report.accuracy,
+        compared_macro_f1: compared,
+        autofile_threshold: report.autoFile.threshold,
+        autofile_share: report.autoFile.share,
+        autofile_target: settings.autoFileTarget,
+        artifact_key: key,
+        artifact_bytes: bytes.byteLength,
+        duration_ms: Date.now() - started,
+        finished_at: new Date(),
+        progress: null,
+      });
+      if (compared === null) {
+        await promoteModelVersion(versionId, null, "The first model: nothing to compare with.");
+      } else if (report.macroF1 >= compared - PROMOTION_MARGIN) {
+        await promoteModelVersion(versionId, null, `Promoted: macro-F1 ${report.macroF1.toFixed(3)} against ${compared.toFixed(3)} for the current model's settings on the same folds.`);
+      } else {
+        await updateModelVersion(versionId, {
+          status: "rejected",
+          reason: `Not promoted: macro-F1 ${report.macroF1.toFixed(3)} is more than one point below ${compared.toFixed(3)} for the current model on the same folds. The current model keeps serving.`,
+        });
+      }
+    } catch (e) {
+      await updateModelVersion(versionId, {
+        status: "failed",
+        progress: null,
+        finished_at: new Date(),
+        duration_ms: Date.now() - started,
+        reason: `Training failed: ${e instanceof Error ? e.message : String(e)} The current model keeps serving.`.slice(0, 600),
+      });
+    }
+    return true;
+  });
+  return ran === true;
+}

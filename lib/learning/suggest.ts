@@ -1,0 +1,64 @@
+// Computes a document's suggestion: ranked cabinet types from the current model (or, before any
+// model exists or for types with too few examples, from the types' descriptions and keywords),
+// matter candidates from identifiers in the text, and whether the office's auto-file bar is met.
+import { listAllMatters, listCabinetTypes } from "@/lib/data/catalog";
+import { getOfficeSettings } from "@/lib/data/settings";
+import type { DocumentForSuggestion, NewSuggestion, RankedType } from "@/lib/data/suggestions";
+import { findKindByMediaType } from "@/lib/intake";
+import { predictDocument, type MlDocument } from "@/lib/ml";
+import { blendWithModel, rankByDescription } from "@/lib/filing/cold-start";
+import { decideMatter, matchMatters } from "@/lib/filing/match-matter";
+import { getServingModel } from "@/lib/learning/model-store";
+
+export async function computeSuggestion(doc: DocumentForSuggestion): Promise<NewSuggestion> {
+  const [types, matters, settings, serving] = await Promise.all([listCabinetTypes(true), listAllMatters(), getOfficeSettings(), getServingModel()]);
+  const text = doc.text ?? "";
+  const mlDoc: MlDocument = { text, filename: doc.original_name, meta: { kind: findKindByMediaType(doc.media_type) ?? "other", pages: doc.page_count ?? undefined, ocr: Boolean(doc.ocr_used) } };
+  const activeIds = new Set(types.map((t) => t.id));
+  const cold = rankByDescription({ text, filename: doc.original_name }, types);
+
+  let ranked: RankedType[];
+  let method: NewSuggestion["method"] = "cold_start";
+  let why: NewSuggestion["why"] = cold.terms.map((term) => ({ term, weight: 0 }));
+  let noConfidentMatch = false;
+  if (serving) {
+    const prediction = predictDocument(serving.model, mlDoc, 6);
+    const counts = serving.model.counts;
+    const modelRanked = prediction.ranked
+      .map((r) => ({ cabinetTypeId: Number(r.label), confidence: r.confidence, probability: r.probability }))
+      .filter((r) => activeIds.has(r.cabinetTypeId));
+    const coldTypeIds = types.filter((t) => (counts[String(t.id)] ?? 0) < settings.minExamplesPerType).map((t) => t.id);
+    ranked = blendWithModel(modelRanked, cold.ranked, coldTypeIds);
+    method = coldTypeIds.length ? "blended" : "model";
+    why = prediction.why.map((w) => ({ term: w.term, weight: w.contribution }));
+    noConfidentMatch = prediction.noConfidentMatch;
+  } else {
+    ranked = cold.ranked.map((r) => ({ cabinetTypeId: r.cabinetTypeId, confidence: r.confidence, probability: null, source: "description" as const }));
+  }
+
+  const candidates = matchMatters(text, doc.original_name, matters);
+  const decision = decideMatter(candidates);
+  const top = ranked[0];
+  const autoFile =
+    settings.autoFileEnabled &&
+    serving !== null &&
+    serving.autoFileThreshold !== null &&
+    top?.source === "model" &&
+    !noConfidentMatch &&
+    top.confidence >= serving.autoFileThreshold &&
+    decision.matterId !== null &&
+    !decision.ambiguous;
+
+  return {
+    documentId: doc.id,
+    modelVersionId: serving?.versionId ?? null,
+    method,
+    ranked,
+    noConfidentMatch,
+    why,
+    matterCandidates: candidates.slice(0, 5),
+    topMatterId: decision.matterId,
+    matterAmbiguous: decision.ambiguous,
+    autoFile,
+  };
+}
