@@ -40,52 +40,77 @@ export function sigmoid(t: number): number {
   return e / (1 + e);
 }
 
+// Element-wise loops sit in plain functions outside the generators below, which V8 optimises
+// better.
+
+/** Σᵢ cᵢ log(1 + exp(−yᵢzᵢ)) + ½‖w‖². */
+function sumLoss(theta: Float64Array, n: number, y: Float64Array, z: Float64Array, cost: Float64Array): number {
+  let f = 0;
+  for (let j = 0; j < n; j++) f += theta[j] * theta[j];
+  f *= 0.5;
+  for (let i = 0; i < z.length; i++) f += cost[i] * logOnePlusExpNeg(y[i] * z[i]);
+  return f;
+}
+
+/** Dᵢ and uᵢ = cᵢ(σ(yᵢzᵢ) − 1)yᵢ at the current zᵢ; returns Σuᵢ (the intercept's gradient). */
+function weighRows(y: Float64Array, z: Float64Array, cost: Float64Array, d: Float64Array, u: Float64Array): number {
+  let sum = 0;
+  for (let i = 0; i < z.length; i++) {
+    const s = sigmoid(y[i] * z[i]);
+    d[i] = cost[i] * s * (1 - s);
+    u[i] = cost[i] * (s - 1) * y[i];
+    sum += u[i];
+  }
+  return sum;
+}
+
+/** u ∘= d; returns Σuᵢ. */
+function scaleRows(u: Float64Array, d: Float64Array): number {
+  let sum = 0;
+  for (let i = 0; i < u.length; i++) {
+    u[i] *= d[i];
+    sum += u[i];
+  }
+  return sum;
+}
+
+/** Σ d. */
+function sumOf(d: Float64Array): number {
+  let sum = 0;
+  for (let i = 0; i < d.length; i++) sum += d[i];
+  return sum;
+}
+
 /** Creates the loss for one binary problem; scratch arrays are allocated once here. */
 export function createLogisticLoss(problem: BinaryProblem): LogisticLoss {
   const { x, y, cost } = problem;
   const n = x.cols;
-  const l = x.rows;
-  const z = new Float64Array(l);
-  const d = new Float64Array(l);
-  const u = new Float64Array(l);
+  const z = new Float64Array(x.rows);
+  const d = new Float64Array(x.rows);
+  const u = new Float64Array(x.rows);
 
   return {
     *evaluate(theta) {
-      yield { kind: "rows", v: theta, out: z };
-      let f = 0;
-      for (let j = 0; j < n; j++) f += theta[j] * theta[j];
-      f *= 0.5;
-      for (let i = 0; i < l; i++) f += cost[i] * logOnePlusExpNeg(y[i] * z[i]);
-      return f;
+      yield { kind: "rows", input: theta, out: z };
+      return sumLoss(theta, n, y, z, cost);
     },
     *gradient(theta, out) {
-      let biasGrad = 0;
-      for (let i = 0; i < l; i++) {
-        const s = sigmoid(y[i] * z[i]);
-        d[i] = cost[i] * s * (1 - s);
-        u[i] = cost[i] * (s - 1) * y[i];
-        biasGrad += u[i];
-      }
-      for (let j = 0; j < n; j++) out[j] = theta[j];
-      yield { kind: "columns", u, out };
+      const biasGrad = weighRows(y, z, cost, d, u);
+      out.set(theta.subarray(0, n));
+      yield { kind: "columns", input: u, out };
       out[n] = biasGrad;
     },
     *multiplyHessian(v, out) {
-      yield { kind: "rows", v, out: u };
-      let biasOut = 0;
-      for (let i = 0; i < l; i++) {
-        u[i] *= d[i];
-        biasOut += u[i];
-      }
-      for (let j = 0; j < n; j++) out[j] = v[j];
-      yield { kind: "columns", u, out };
+      yield { kind: "rows", input: v, out: u };
+      const biasOut = scaleRows(u, d);
+      out.set(v.subarray(0, n));
+      yield { kind: "columns", input: u, out };
       out[n] = biasOut;
     },
     *diagonalHessian(out) {
       out.fill(1, 0, n);
-      let bias = 0;
-      for (let i = 0; i < l; i++) bias += d[i];
-      yield { kind: "squares", u: d, out };
+      const bias = sumOf(d);
+      yield { kind: "squares", input: d, out };
       out[n] = bias;
     },
   };

@@ -2,7 +2,7 @@
 // that made it, so the same text is vectorised the same way at prediction time.
 import type { CsrMatrix } from "./csr";
 import { DEFAULT_LOGISTIC_OPTIONS } from "./logistic";
-import { chooseThreads, trainOneVsRest } from "./one-vs-rest";
+import { chooseThreads, trainOneVsRest, warmUpWorkers } from "./one-vs-rest";
 import { predictRows, type LinearClassifier, type Prediction } from "./predict";
 import { fitVocabulary, transformTokens, DEFAULT_TFIDF_OPTIONS, type TfidfOptions, type TfidfVocabulary } from "./tfidf";
 import { tokenizeDocument, DEFAULT_TOKENIZE_OPTIONS, type TokenizeOptions } from "./tokenize";
@@ -89,12 +89,13 @@ export async function trainModel(
 ): Promise<FoldwrightModel & { timings: TrainTimings }> {
   checkTrainingSet(docs);
   const options = resolveOptions(input);
+  const classes = [...new Set(docs.map((d) => d.label))].sort();
+  warmUpWorkers(Math.min(options.threads, classes.length));
   const t0 = performance.now();
   const tokens = tokenizeAll(docs, options.tokenize);
   const vocabulary = fitVocabulary(tokens, options.tfidf);
   const x = transformTokens(tokens, vocabulary);
   const t1 = performance.now();
-  const classes = [...new Set(docs.map((d) => d.label))].sort();
   const classIndex = new Map(classes.map((c, k) => [c, k]));
   const labelIds = Int32Array.from(docs, (d) => classIndex.get(d.label)!);
   const ovr = await trainOneVsRest(x, labelIds, classes.length, options);

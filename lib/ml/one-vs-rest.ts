@@ -7,7 +7,7 @@
 import { availableParallelism } from "node:os";
 import { assertFiniteCsr, type CsrMatrix } from "./csr";
 import { checkLogisticOptions, trainClassesAgainstRest, type LogisticOptions } from "./logistic";
-import { runClassWorkers, type ClassResult } from "./ovr-pool";
+import { runClassWorkers, startTrainingWorkers, type ClassResult } from "./ovr-pool";
 
 export interface OneVsRestOptions extends LogisticOptions {
   /** Worker threads; 1 trains in the calling thread without workers. */
@@ -29,6 +29,15 @@ export interface OneVsRestModel {
 /** Default thread count: the cores there are (at most 8: more rarely pays on office-sized data). */
 export function chooseThreads(): number {
   return Math.max(1, Math.min(availableParallelism(), 8));
+}
+
+/**
+ * Starts the training workers ahead of a fit (trainModel calls it before vectorising, so their
+ * start-up overlaps that work). A failure here is met again, and handled, when the fit asks for
+ * the workers: it then trains in this thread.
+ */
+export function warmUpWorkers(threads: number): void {
+  if (threads > 1) startTrainingWorkers(threads).catch(() => undefined);
 }
 
 /** Checks labels: one per row, ids in range, at least two classes, each class present. */

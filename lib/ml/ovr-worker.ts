@@ -1,36 +1,26 @@
-// Worker side of ovr-pool.ts: trains its share of the classes in lockstep, posts each class's
-// weights, then closes.
-import { parentPort, workerData } from "node:worker_threads";
+// Worker side of ovr-pool.ts: for each job, trains its share of the classes in lockstep and
+// posts each class's weights. The worker stays for the next job until the pool stops it.
+import { parentPort } from "node:worker_threads";
 import type { CsrMatrix } from "./csr";
 import { trainClassesAgainstRest } from "./logistic";
-import type { SharedProblem } from "./ovr-pool";
+import type { TrainingJob, WorkerMessage } from "./ovr-pool";
 
-const problem = workerData as SharedProblem;
-const x: CsrMatrix = {
-  rows: problem.rows,
-  cols: problem.cols,
-  indptr: problem.indptr,
-  indices: problem.indices,
-  data: problem.data,
-};
-
-/** Trains the classes and posts their weights (transferred, not copied). */
-function trainAndPost(classIds: number[]): void {
-  const models = trainClassesAgainstRest(x, problem.labelIds, classIds, problem.options);
+/** Trains the job's classes and posts their weights (transferred, not copied). */
+function runJob(job: TrainingJob): void {
+  const x: CsrMatrix = { rows: job.rows, cols: job.cols, indptr: job.indptr, indices: job.indices, data: job.data };
+  const models = trainClassesAgainstRest(x, job.labelIds, job.classIds, job.options);
   models.forEach((m, a) => {
-    parentPort!.postMessage(
-      { type: "result", classId: classIds[a], weights: m.weights, intercept: m.intercept, iterations: m.iterations, converged: m.converged },
-      [m.weights.buffer as ArrayBuffer],
-    );
+    const msg: WorkerMessage = { type: "result", jobId: job.jobId, classId: job.classIds[a], ...m };
+    parentPort!.postMessage(msg, [m.weights.buffer as ArrayBuffer]);
   });
 }
 
-parentPort!.once("message", (msg: { classIds: number[] }) => {
+parentPort!.on("message", (job: TrainingJob) => {
   try {
-    trainAndPost(msg.classIds);
+    runJob(job);
   } catch (err) {
-    parentPort!.postMessage({ type: "error", message: err instanceof Error ? err.message : String(err) });
+    const msg: WorkerMessage = { type: "error", jobId: job.jobId, message: err instanceof Error ? err.message : String(err) };
+    parentPort!.postMessage(msg);
   }
-  parentPort!.close();
 });
-parentPort!.postMessage({ type: "ready" });
+parentPort!.postMessage({ type: "ready" } satisfies WorkerMessage);

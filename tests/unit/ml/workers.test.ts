@@ -20,4 +20,18 @@ describe("one-vs-rest on worker threads", () => {
     expect(Array.from(parallel.weights)).toEqual(Array.from(single.weights));
     expect(Array.from(parallel.intercepts)).toEqual(Array.from(single.intercepts));
   });
+
+  it("reuses the started workers for the next training, and for two at once", async () => {
+    const random = createRandom(9);
+    const rows = Array.from({ length: 120 }, () => Array.from({ length: 8 }, () => (random() < 0.5 ? random() : 0)));
+    const labels = Int32Array.from(rows, (r) => (r[0] > r[1] ? 0 : r[2] > 0.3 ? 1 : 2));
+    const x = buildCsrFromDense(rows);
+    const options = { C: 2, tolerance: 1e-8, maxIterations: 200, balanced: false };
+    const single = await trainOneVsRest(x, labels, 3, { ...options, threads: 1 });
+    const [a, b] = await Promise.all([1, 2].map(() => trainOneVsRest(x, labels, 3, { ...options, threads: 2 })));
+    for (const m of [a, b]) {
+      expect(m.threadsUsed).toBe(2);
+      expect(Array.from(m.weights)).toEqual(Array.from(single.weights));
+    }
+  });
 });
