@@ -11,8 +11,19 @@ import { checkDocument, checkTrainingSet } from "./validate";
 
 export const MODEL_KIND = "foldwright-model";
 export const MODEL_FORMAT_VERSION = 1;
-/** C = 30 ranked best of 10, 20, 30 on the CUAD clause split with our tokens (see the README). */
-export const DEFAULT_C = 30;
+/**
+ * Default C, chosen by 5-fold stratified cross-validation on the CUAD clause TRAIN split only
+ * (seed 42; each fold fits its own vocabulary), never on its test split:
+ *   npm run classifier -- evaluate --data ../shared/data/cuad-clauses/train.jsonl --folds 5 --C 100
+ *   C         3       10      30      100     | 300     1000
+ *   accuracy  0.8495  0.8674  0.8734  0.8756  | 0.8771  0.8764
+ *   macro-F1  0.6163  0.6795  0.6971  0.7041  | 0.7094  0.7140
+ *   top-3     0.9507  0.9609  0.9641  0.9652  | 0.9646  0.9651
+ * 100 wins both measures on the grid set beforehand (3 … 100). Past it, 300 leads on accuracy
+ * and 1000 on macro-F1, by less than one standard error of the accuracy (±0.0036 on 8,218
+ * documents), so the more regularised and faster-to-fit 100 stays.
+ */
+export const DEFAULT_C = 100;
 
 export interface TrainOptions {
   tokenize: TokenizeOptions;
