@@ -1,0 +1,65 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { forbidden, notFound } from "next/navigation";
+import { DocumentHeader } from "@/components/document/document-header";
+import { documentState, lastPlacement } from "@/components/document/document-state";
+import { SuggestionPanel } from "@/components/document/suggestion-panel";
+import { TextPanel } from "@/components/document/text-panel";
+import { Timeline } from "@/components/document/timeline";
+import { can } from "@/lib/auth/permissions";
+import { requirePageUser } from "@/lib/data/current-user";
+import { getDocument } from "@/lib/data/documents";
+import { getLatestSuggestion, listDocumentTimeline } from "@/lib/data/filing-record";
+import { AppError } from "@/lib/errors";
+import { documentIdSchema } from "@/lib/validations/documents";
+
+export const metadata: Metadata = { title: "Document" };
+
+interface DocumentPageProps {
+  params: Promise<{ id: string }>;
+}
+
+/** The document behind the ethical wall check: a missing one is a 404, a walled one a 403. */
+async function loadDocument(user: Parameters<typeof getDocument>[0], id: number) {
+  try {
+    return await getDocument(user, id);
+  } catch (e) {
+    if (e instanceof AppError && e.status === 404) notFound();
+    if (e instanceof AppError && e.status === 403) forbidden();
+    throw e;
+  }
+}
+
+export default async function DocumentPage({ params }: DocumentPageProps) {
+  const { user, allowed } = await requirePageUser("documents.read");
+  if (!allowed) forbidden();
+  const id = documentIdSchema.safeParse((await params).id);
+  if (!id.success) notFound();
+  const document = await loadDocument(user, id.data); // checks access before anything else is read
+  const [suggestion, timeline] = await Promise.all([getLatestSuggestion(user, id.data), listDocumentTimeline(id.data)]);
+  const state = documentState(document, suggestion, timeline);
+
+  return (
+    <article className="space-y-6">
+      <nav aria-label="Breadcrumb" className="text-xs text-ink-soft">
+        {can(user.role, "history.read") ? (
+          <Link href={`/history?document=${document.id}`} className="text-verdigris hover:underline">
+            This document in History
+          </Link>
+        ) : (
+          <span>Document #{document.id}</span>
+        )}
+      </nav>
+      <DocumentHeader document={document} state={state} placement={lastPlacement(timeline)} />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
+        <div className="min-w-0 space-y-6">
+          <TextPanel text={document.text} truncated={document.textTruncated} charCount={document.charCount} reading={document.status === "reading"} />
+          <Timeline events={timeline} />
+        </div>
+        <aside className="lg:sticky lg:top-6 lg:self-start">
+          <SuggestionPanel suggestion={suggestion} />
+        </aside>
+      </div>
+    </article>
+  );
+}
