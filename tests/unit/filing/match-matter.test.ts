@@ -50,6 +50,14 @@ describe("matchMatters", () => {
     expect(decideMatter(candidates)).toEqual({ matterId: 2, ambiguous: false });
   });
 
+  it("needs two distinctive title words to pin, so one common word does not", () => {
+    const common = match("Marlowe Bakery: we will keep the originals unless you ask us to return them.");
+    expect(decideMatter(common)).toEqual({ matterId: null, ambiguous: true });
+    const pinned = match("Marlowe Bakery: your 2025 tax return is ready to sign.");
+    expect(pinned[0]).toMatchObject({ matterId: 1, reasons: expect.arrayContaining(["matter title words “tax return”"]) });
+    expect(decideMatter(pinned)).toEqual({ matterId: 1, ambiguous: false });
+  });
+
   it("combines name, e-mail and tax ID evidence for a single-matter client (noisy-OR)", () => {
     const [best] = match("Ostrander Trust\nFrom: kit@mail.ostrander.example\nTaxpayer EIN xx-xxx9031");
     expect(best.matterId).toBe(3);
