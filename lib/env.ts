@@ -64,6 +64,8 @@ export const env = {
     bcryptCost: int("BCRYPT_COST", 11),
   },
   demoPassword: text("DEMO_PASSWORD", "foldwright-demo"),
+  /** Seed an empty office with a few hundred generated, filed demo documents. */
+  seedDemoDocuments: bool("SEED_DEMO_DOCUMENTS", true),
   uploadMaxBytes: int("UPLOAD_MAX_BYTES", 50 * 1024 * 1024),
   uploadMaxFiles: int("UPLOAD_MAX_FILES", 50),
   read: {

@@ -2,7 +2,7 @@ import "server-only";
 // Storing a suggestion, its "suggested" record, and an auto-filing when the office allows it.
 import type { Knex } from "knex";
 import { getDb } from "@/db";
-import { completeJob } from "@/lib/data/jobs";
+import { completeJob, enqueueJob } from "@/lib/data/jobs";
 
 export interface RankedType {
   cabinetTypeId: number;
@@ -100,4 +100,17 @@ export async function saveSuggestion(jobId: number | null, workerId: string | nu
     await insertSuggestion(trx, s);
     return true;
   });
+}
+
+/** Queues a suggestion for every read, unfiled document that has none and none on the way. */
+export async function queueMissingSuggestions(): Promise<number> {
+  const db = getDb();
+  const ids: number[] = await db("documents as d")
+    .where("d.status", "ready")
+    .whereNull("d.filed_at")
+    .whereNotExists((q) => q.select(db.raw("1")).from("suggestions as s").whereRaw("s.document_id = d.id"))
+    .whereNotExists((q) => q.select(db.raw("1")).from("jobs as j").whereRaw("j.document_id = d.id").where("j.kind", "suggest").whereIn("j.status", ["queued", "running"]))
+    .pluck("d.id");
+  for (const id of ids) await enqueueJob("suggest", id);
+  return ids.length;
 }

@@ -21,7 +21,8 @@ export function resolvePdfAssets(): PdfAssetOptions {
   if (cached) return cached;
   const root = findPdfjsRoot();
   if (!root) return (cached = {});
-  const folder = (name: string) => (existsSync(path.join(root, name)) ? path.join(root, name) + path.sep : undefined);
+  // turbopackIgnore: a run-time lookup inside node_modules, not a file the build should trace.
+  const folder = (name: string) => (existsSync(/*turbopackIgnore: true*/ path.join(root, name)) ? path.join(root, name) + path.sep : undefined);
   const cMapUrl = folder("cmaps");
   cached = {
     standardFontDataUrl: folder("standard_fonts"),
@@ -36,6 +37,6 @@ function findPdfjsRoot(): string | undefined {
     return path.dirname(createRequire(import.meta.url).resolve("pdfjs-dist/package.json"));
   } catch {
     const fallback = path.join(process.cwd(), "node_modules", "pdfjs-dist");
-    return existsSync(fallback) ? fallback : undefined;
+    return existsSync(/*turbopackIgnore: true*/ fallback) ? fallback : undefined;
   }
 }

@@ -9,16 +9,23 @@ import { withNamedLock } from "@/lib/data/locks";
 import { findCurrentModelParams, promoteModelVersion, updateModelVersion } from "@/lib/data/models";
 import { getOfficeSettings } from "@/lib/data/settings";
 import { loadTrainingSet, type TrainingRow } from "@/lib/data/training-set";
-import { saveModel, trainModel, type TrainOptionsInput } from "@/lib/ml";
+import { resolveOptions, saveModel, trainModel, type TrainOptionsInput } from "@/lib/ml";
 import { putObject } from "@/storage/s3";
 import { chooseFolds, scoreOnFolds } from "@/lib/learning/evaluate-candidate";
 import { TRAIN_JOB } from "@/lib/jobs/kinds";
 
 export const PROMOTION_MARGIN = 0.01; // "not more than one point lower" (DESIGN §5)
-/** Training settings of new versions; threads 1 keeps a web server's second core free. */
-export const DEFAULT_PARAMS: TrainOptionsInput = { C: 30, threads: 1 };
+/** Training settings of new versions: lib/ml's C; one thread keeps a web server's other core free. */
+export const DEFAULT_PARAMS: TrainOptionsInput = { C: resolveOptions().C, threads: 1 };
 
 export type RetrainRequest = { status: "queued"; versionId: number } | { status: "busy"; versionId: number };
+
+/** Trains a version here and now (the start command's first model); returns its id. */
+export async function trainNow(trigger: "start" | "manual"): Promise<number> {
+  const [versionId] = await getDb()("model_versions").insert({ trigger, status: "training", progress: "Starting" });
+  await runTraining(versionId);
+  return versionId;
+}
 
 /** Creates a version in "training" and queues its job, unless a run is already under way. */
 export async function requestRetrain(trigger: "nightly" | "manual" | "start", userId: number | null): Promise<RetrainRequest> {

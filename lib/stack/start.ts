@@ -10,6 +10,29 @@ import { buildApp, serveApp } from "@/lib/stack/app-server";
 
 const dev = process.argv.includes("--dev");
 
+/** So that the first screen a visitor sees has real suggestions. */
+async function trainFirstModel(): Promise<void> {
+  const { findCurrentModel, getModelVersion } = await import("@/lib/data/models");
+  if (await findCurrentModel()) return;
+  console.log("  Training the first model on the demo office's filed documents …");
+  const { trainNow } = await import("@/lib/learning/retrain");
+  const v = await getModelVersion(await trainNow("start"));
+  if (v.status === "current") {
+    console.log(`  Model version #${v.id}: ${v.trainCount} documents, cross-validated macro-F1 ${v.macroF1?.toFixed(3)}, accuracy ${v.accuracy?.toFixed(3)} (${((v.durationMs ?? 0) / 1000).toFixed(1)} s).`);
+  } else {
+    console.log(`  No model yet: ${v.reason}`);
+  }
+}
+
+/** Documents waiting without a suggestion (the demo's, or after a crash) get one queued. */
+async function queueSuggestions(): Promise<void> {
+  const { queueMissingSuggestions } = await import("@/lib/data/suggestions");
+  const n = await queueMissingSuggestions();
+  if (n) console.log(`  ${n} waiting document${n === 1 ? "" : "s"} queued for suggestions.`);
+  const { closeDb } = await import("@/db");
+  await closeDb();
+}
+
 async function main(): Promise<void> {
   const t0 = Date.now();
   console.log("Starting MariaDB and the S3 fake on 127.0.0.1 …");
@@ -21,6 +44,8 @@ async function main(): Promise<void> {
   await migrateDatabase();
   await seedDatabase();
   console.log(`  Database "${env.db.name}" migrated and seeded with the demo office.`);
+  await trainFirstModel();
+  await queueSuggestions();
 
   const appEnv = { SESSION_SECRET: env.session.secret || localSessionSecret(), AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true" };
   if (!dev) {
