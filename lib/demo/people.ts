@@ -1,5 +1,6 @@
 // Invented names for the demo documents. None is meant to be a real person, firm, bank, court or
 // agency; towns are made up too. E-mail domains end in .example (RFC 2606).
+import { DEMO_OFFICE } from "@/db/demo/office";
 import type { Random } from "./random";
 
 export const GIVEN = ["Ana", "Bram", "Cosima", "Dario", "Elske", "Fenwick", "Greer", "Halvard", "Ines", "Joss", "Kestrel", "Liesel", "Mattias", "Noor", "Orla", "Piet", "Quilla", "Rosalind", "Saoirse", "Tobiah", "Ulla", "Vesna", "Wendell", "Ysolde"];
@@ -12,7 +13,7 @@ export const CARDS = ["Meridian Business Card", "Harbourline Visa Business", "Co
 export const AUTHORITIES = ["Department of Revenue of the State of Westmere", "Westmere Tax Commission", "Office of the Revenue Commissioner, Lindenport", "Federal Revenue Office, Easterby Service Center"];
 export const COURTS = ["Superior Court of Westmere County", "District Court for the County of Lindenport", "Circuit Court of Easterby", "Probate Court of Fernhollow County"];
 export const COUNTERPARTIES = ["Tidewell Holdings LLC", "Greystone Quay Properties", "Callowmouth Carriers Inc.", "Brindle Cross Estates", "Ashgrove Leasing Co.", "Northlight Equipment Rentals"];
-export const OFFICE = { name: "Alder Quay Partners", domain: "alderquay.example", street: "9 Chandlery Walk", town: "Westmere" };
+export const OFFICE = { name: DEMO_OFFICE, domain: "alderquay.example", street: "9 Chandlery Walk", town: "Westmere" };
 
 export function pickPerson(rng: Random): string {
   return `${rng.pick(GIVEN)} ${rng.pick(FAMILY)}`;

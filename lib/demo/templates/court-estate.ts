@@ -63,6 +63,7 @@ const will: Template = (ctx) => {
       { kind: "paragraph", text: `I appoint ${executor} as executor of this will, and if unable to act, ${pickPerson(rng)}.` },
       { kind: "paragraph", text: `I give my residuary estate to the trustee of ${trustOf(ctx)} to hold for the beneficiaries ${heirs.join(", ")} in equal shares.` },
       ...identifiers(ctx),
+      ...(rng.chance(0.4) ? [{ kind: "pageBreak" as const }] : []),
       { kind: "lines", lines: [`Signed on ${dated(ctx)}`, testator, "Witnesses:", pickPerson(rng), pickPerson(rng)] },
     ],
   };

@@ -10,7 +10,7 @@ import { TAX_PAYROLL_TEMPLATES } from "./tax-payroll";
 
 export type { Template } from "./parts";
 
-export const COVER_SHARE = 0.25;
+export const COVER_SHARE = 0.3;
 
 export const TEMPLATES_BY_TYPE: Record<string, Template[]> = {
   ...MONEY_TEMPLATES,

@@ -59,11 +59,12 @@ const lease: Template = (ctx) => {
       { kind: "paragraph", text: `The Landlord leases to the Tenant the premises at ${premises} for a term of ${years} years from the commencement date, with ${rng.pick(["one option", "two options"])} to renew.` },
       { kind: "subheading", text: "2. Rent" },
       { kind: "paragraph", text: `The Tenant shall pay rent of ${formatMoney(rent)} per month in advance, increased by ${rng.int(2, 4)}% on each anniversary, and a security deposit of ${formatMoney(rent * 2)}.` },
-      ...(rng.chance(0.5) ? [{ kind: "pageBreak" as const }] : []),
+      ...(rng.chance(0.6) ? [{ kind: "pageBreak" as const }] : []),
       { kind: "subheading", text: "3. Termination" },
       { kind: "paragraph", text: "Either party may terminate this lease on a material breach not cured within thirty days of written notice. The Tenant shall return the premises in good repair." },
       { kind: "subheading", text: "4. Governing law" },
       { kind: "paragraph", text: `This agreement is governed by the laws of the State of ${rng.pick(TOWNS)}. Signed by the parties on the date above.` },
+      ...(rng.chance(0.4) ? [{ kind: "pageBreak" as const }, { kind: "subheading" as const, text: "Signatures" }] : []),
       { kind: "lines", lines: [`Landlord: ${landlord}`, `Tenant: ${ctx.client}`, `By: ${ctx.contact}`] },
     ],
   };

@@ -21,6 +21,7 @@ const minutes: Template = (ctx) => {
         { kind: "subheading" as const, text: `Resolution ${i + 1}` },
         { kind: "paragraph" as const, text: `RESOLVED, ${r}. Moved by ${rng.pick(directors)}, seconded by ${rng.pick(directors)}; carried ${rng.pick(["unanimously", "by a majority of votes"])}.` },
       ]),
+      ...(rng.chance(0.3) ? [{ kind: "pageBreak" as const }] : []),
       { kind: "paragraph", text: "There being no further business, the meeting was adjourned." },
       { kind: "lines", lines: ["Secretary", directors[1]] },
     ],

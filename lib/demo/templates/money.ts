@@ -3,9 +3,19 @@
 import { clientEmail, matterRef, taxIdLine } from "../context";
 import { BANKS, CARDS, OFFICE, VENDORS } from "../people";
 import { formatDate, formatMoney, monthName } from "../random";
+import type { Block } from "../doc-model";
 import { addressee, dated, letterhead, officeLetterhead, pickSome, salutation, signOff, type Template } from "./parts";
 
 const ITEMS = ["Bread flour, 25 kg sacks", "Proving baskets", "Walk-in cooler service visit", "Courier, same day", "Printer toner", "Linen hire, weekly", "Compostable boxes, case of 200", "Electrical inspection", "Bookkeeping, monthly", "Payroll processing", "Dental supplies, assorted", "Pallet storage, per week"];
+
+// A second page of standard terms, as many suppliers print on the back of an invoice.
+const TERMS_PAGE: Block[] = [
+  { kind: "pageBreak" },
+  { kind: "subheading", text: "Terms and conditions of sale" },
+  { kind: "paragraph", text: "1. Invoices are payable within the period stated on the front. Overdue amounts bear interest at 1.5% per month." },
+  { kind: "paragraph", text: "2. Title to goods passes on payment in full. Claims for shortages must be made within seven days of delivery." },
+  { kind: "paragraph", text: "3. Queries about this invoice should be sent to the accounts department, quoting the invoice number." },
+];
 
 const invoice: Template = (ctx) => {
   const { rng } = ctx;
@@ -26,6 +36,7 @@ const invoice: Template = (ctx) => {
       { kind: "lines", lines: [`Invoice number: ${no}`, `Invoice date: ${dated(ctx)}`, `Bill to: ${ctx.client}`, ...clientEmail(ctx), ...matterRef(ctx)] },
       { kind: "table", header: true, rows: [["Description", "Qty", "Unit price", "Amount"], ...lines] },
       { kind: "lines", lines: [`Subtotal: ${formatMoney(subtotal)}`, `Sales tax: ${formatMoney(tax)}`, `Amount due: ${formatMoney(subtotal + tax)}`], align: "right" },
+      ...(rng.chance(0.3) ? TERMS_PAGE : []),
       { kind: "paragraph", text: rng.pick([`Payment terms: net ${rng.pick([14, 30, 45])} days. Please remit to the account below and quote the invoice number.`, "Please pay by bank transfer within 30 days. Late payments may incur a charge of 1.5% per month.", "Thank you for your business. Remit payment to the address above."]) },
     ],
   };
@@ -80,8 +91,9 @@ const bankStatement: Template = (ctx) => {
       { kind: "heading", text: card ? "Card Account Statement" : rng.pick(["Business Checking Statement", "Account Statement", "Monthly Statement"]) },
       { kind: "lines", lines: [ctx.client, `Account number: ****${rng.int(1000, 9999)}`, `Statement period: ${monthName(ctx.date)} 1 to ${monthName(ctx.date)} 30`, ...taxIdLine(ctx)] },
       { kind: "table", rows: [["Opening balance", formatMoney(opening)], ["Closing balance", formatMoney(balance)]] },
-      ...(rows.length > 11 && rng.chance(0.5) ? [{ kind: "pageBreak" as const }] : []),
+      ...(rows.length > 10 ? [{ kind: "pageBreak" as const }] : []),
       { kind: "table", header: true, rows: [["Date  Description", "Deposits", "Withdrawals", "Balance"], ...rows] },
+      ...(rng.chance(0.3) ? [{ kind: "pageBreak" as const }, { kind: "subheading" as const, text: "Important information about your account" }, { kind: "paragraph" as const, text: "In case of errors or questions about your electronic transfers, write to us at the address on page one as soon as you can. We must hear from you no later than 60 days after we sent the first statement on which the problem appeared." }] : []),
       { kind: "paragraph", text: rng.pick(["Please examine this statement promptly and report any discrepancy within 60 days.", "Deposits are insured up to the applicable limits. Questions? Call the number on the back of your card.", "Minimum payment due on the 25th. Interest is charged on balances not paid in full."]) },
     ],
   };
