@@ -11,8 +11,8 @@
 //   The client signals (name, alias, tax ID, e-mail) combine into one client score c, which is
 //   shared among the client's matters: each open matter has weight 1 and each closed one 0.5,
 //   and a matter gets c·weight/Σweights. A matter is "pinned" when its number is in the text, or
-//   when at least half of the title words that set it apart from the client's other matters are
-//   ("lease renewal" for "Shop lease renewal"); pinned matters share c between them and the
+//   when at least half (and at least two) of the title words that set it apart from the client's
+//   other matters are ("lease renewal" for "Shop lease renewal"); pinned matters share c, the
 //   others keep a residue of 0.1·c. A closed matter's final score is multiplied by 0.75, because
 //   new paper mostly belongs to live work, but a clerk may still file to it.
 //   decideMatter picks the best candidate when it reaches 0.5 and leads the next by at least 0.15;
