@@ -29,8 +29,3 @@ export function toPlainText(blocks: Block[]): string {
   }
   return parts.join("\n\n");
 }
-
-/** Page count a document will have at least (its explicit breaks + 1). */
-export function countPageBreaks(blocks: Block[]): number {
-  return blocks.filter((b) => b.kind === "pageBreak").length;
-}
