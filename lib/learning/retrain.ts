@@ -20,6 +20,21 @@ export const DEFAULT_PARAMS: TrainOptionsInput = { C: resolveOptions().C, thread
 
 export type RetrainRequest = { status: "queued"; versionId: number } | { status: "busy"; versionId: number };
 
+/**
+ * A run whose process died without a job to resume it (a start command stopped mid-training)
+ * would block every later run: after an hour with no live job it is marked failed.
+ */
+async function failAbandonedRuns(): Promise<void> {
+  const db = getDb();
+  await db("model_versions as v")
+    .where("v.status", "training")
+    .whereRaw("v.created_at < NOW(3) - INTERVAL 60 MINUTE")
+    .whereNotExists((q) =>
+      q.select(db.raw("1")).from("jobs as j").where("j.kind", TRAIN_JOB).whereIn("j.status", ["queued", "running"]).whereRaw("JSON_VALUE(j.payload, '$.versionId') = v.id"),
+    )
+    .update({ "v.status": "failed", "v.progress": null, "v.reason": "The run stopped before finishing (its process ended). The current model kept serving." });
+}
+
 /** Trains a version here and now (the start command's first model); returns its id. */
 export async function trainNow(trigger: "start" | "manual"): Promise<number> {
   const [versionId] = await getDb()("model_versions").insert({ trigger, status: "training", progress: "Starting" });
@@ -30,6 +45,7 @@ export async function trainNow(trigger: "start" | "manual"): Promise<number> {
 /** Creates a version in "training" and queues its job, unless a run is already under way. */
 export async function requestRetrain(trigger: "nightly" | "manual" | "start", userId: number | null): Promise<RetrainRequest> {
   const result = await withNamedLock("foldwright_retrain_request", 10, async () => {
+    await failAbandonedRuns();
     const busy = await getDb()("model_versions").where({ status: "training" }).first("id");
     if (busy) return { status: "busy" as const, versionId: busy.id as number };
     const versionId = await getDb().transaction(async (trx) => {

@@ -140,3 +140,13 @@ describe("retraining", () => {
     }
   });
 });
+
+describe("an abandoned run", () => {
+  it("does not block retraining forever: after an hour without a live job it is marked failed", async () => {
+    const [stale] = await owner("model_versions").insert({ trigger: "start", status: "training", created_at: owner.raw("NOW(3) - INTERVAL 2 HOUR") });
+    const r = await requestRetrain("manual", null);
+    expect(r.status).toBe("queued");
+    expect(await version(stale)).toMatchObject({ status: "failed", reason: expect.stringMatching(/stopped before finishing/) });
+    await owner("model_versions").where({ id: r.versionId }).update({ status: "failed" });
+  });
+});
