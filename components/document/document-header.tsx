@@ -3,7 +3,7 @@ import type { FilingEvent } from "@/lib/data/filing-record";
 import { actionWords } from "@/components/history/action-words";
 import { DocumentStateBadge } from "./state-badge";
 import type { DocumentState } from "./document-state";
-import { formatSize, formatUtc } from "./format";
+import { formatKind, formatSize, formatUtc } from "./format";
 
 interface DocumentHeaderProps {
   document: DocumentDetail;
@@ -49,7 +49,10 @@ export function DocumentHeader({ document: d, state, placement }: DocumentHeader
         <Fact label="Pages">{d.pageCount ?? "–"}</Fact>
         <Fact label="Text read by">{d.status === "reading" ? "still reading" : d.ocrUsed ? "OCR (scanned pages)" : "the file's own text"}</Fact>
         <Fact label="Size">
-          {formatSize(d.sizeBytes)} <span className="text-xs text-ink-faint">{d.mediaType}</span>
+          {formatSize(d.sizeBytes)}{" "}
+          <span className="break-all text-xs text-ink-faint" title={d.mediaType}>
+            {formatKind(d.mediaType)}
+          </span>
         </Fact>
       </dl>
       <div className="rounded border border-paper-edge bg-white/60 px-4 py-2 text-sm" data-testid="document-filed">

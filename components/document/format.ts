@@ -27,3 +27,16 @@ export function formatDuration(ms: number): string {
   if (m < 60) return `${m} min ${s % 60} s`;
   return `${Math.floor(m / 60)} h ${m % 60} min`;
 }
+
+const KINDS: Record<string, string> = {
+  "application/pdf": "PDF",
+  "application/vnd.openxmlformats-officedocument.wordprocessingml.document": "Word (.docx)",
+  "image/png": "PNG image",
+  "image/jpeg": "JPEG image",
+  "image/tiff": "TIFF image",
+};
+
+/** A media type as a person names the file kind. */
+export function formatKind(mediaType: string): string {
+  return KINDS[mediaType.split(";")[0].trim()] ?? mediaType;
+}

@@ -1,5 +1,6 @@
 import type { SuggestionDetail } from "@/lib/data/filing-record";
 import { ConfidenceBar } from "./confidence-bar";
+import type { DocumentState } from "./document-state";
 import { formatUtc } from "./format";
 
 function methodWords(s: SuggestionDetail): string {
@@ -19,12 +20,20 @@ function termWords(term: string): { text: string; where: string | null } {
 const SHOWN_RANKS = 5;
 
 /** The latest suggestion: ranked cabinet types, why, matter candidates and how it was made. */
-export function SuggestionPanel({ suggestion: s }: { suggestion: SuggestionDetail | null }) {
+export function SuggestionPanel({ suggestion: s, state }: { suggestion: SuggestionDetail | null; state: DocumentState }) {
   if (!s) {
+    const why =
+      state === "filed"
+        ? "None was made: a person filed this document before Foldwright suggested a place for it."
+        : state === "reading"
+          ? "Foldwright suggests a place once the text is read."
+          : state === "unreadable"
+            ? "No text could be read, so there is nothing to suggest from. File it by hand."
+            : "Foldwright has not suggested a place yet; it does so shortly after the text is read.";
     return (
       <section aria-labelledby="suggestion-heading" className="rounded border border-paper-edge bg-white/70 p-4">
         <h2 id="suggestion-heading" className="font-serif text-lg">Suggestion</h2>
-        <p className="mt-1 text-sm text-ink-soft">No suggestion yet. Foldwright suggests a place once the text is read; an unreadable document is filed by hand.</p>
+        <p className="mt-1 text-sm text-ink-soft">{why}</p>
       </section>
     );
   }

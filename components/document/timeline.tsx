@@ -24,10 +24,10 @@ export function Timeline({ events }: { events: FilingEvent[] }) {
                   <span className="text-ink-soft"> by {e.user ?? "Foldwright"}</span>
                   {e.modelVersionId !== null && <span className="text-xs text-ink-faint"> · model version #{e.modelVersionId}</span>}
                 </p>
-                <p className="flex flex-wrap items-center gap-x-3">
+                <div className="flex flex-wrap items-end gap-x-3">
                   <EventMove event={e} />
                   {e.confidence !== null && <ConfidenceBar value={e.confidence} barClassName="w-12" />}
-                </p>
+                </div>
                 {e.reason && <p className="text-xs text-ink-soft">{e.reason}</p>}
               </div>
             </li>

@@ -12,18 +12,24 @@ function Place({ cabinetType, matter }: { cabinetType: string | null; matter: st
   );
 }
 
-/** Where an event moved a document: "from → to", or just "to" when it came from nowhere. */
+/** Where an event moved a document: "from" on one line and "→ to" below it, or just "to" when it came from nowhere. */
 export function EventMove({ event }: { event: Move }) {
   const hasFrom = event.fromCabinetType !== null || event.fromMatter !== null;
   return (
-    <span>
+    <span className="block">
       {hasFrom && (
-        <>
+        <span className="block text-ink-soft">
           <Place cabinetType={event.fromCabinetType} matter={event.fromMatter} />
-          <span aria-label="to" className="px-1 text-ink-faint">→</span>
-        </>
+        </span>
       )}
-      <Place cabinetType={event.toCabinetType} matter={event.toMatter} />
+      <span className="block">
+        {hasFrom && (
+          <span aria-label="to" className="pr-1 text-ink-faint">
+            →
+          </span>
+        )}
+        <Place cabinetType={event.toCabinetType} matter={event.toMatter} />
+      </span>
     </span>
   );
 }

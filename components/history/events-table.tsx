@@ -29,17 +29,17 @@ export function EventsTable({ items }: { items: FilingEvent[] }) {
           {items.map((e) => (
             <tr key={e.id} className="border-t border-paper-edge/70 hover:bg-paper/60" data-testid="history-row" data-action={e.action}>
               <td className={`${TD} whitespace-nowrap font-mono text-xs`}>{formatUtc(e.at, true)}</td>
-              <td className={`${TD} max-w-52`}>
+              <td className={`${TD} max-w-44`}>
                 <Link href={`/documents/${e.documentId}`} className="block truncate text-verdigris hover:underline" title={e.documentName}>
                   <span className="font-mono text-xs text-ink-faint">#{e.documentId}</span> {e.documentName}
                 </Link>
               </td>
               <td className={`${TD} whitespace-nowrap font-medium`}>{actionWords(e.action)}</td>
-              <td className={`${TD} whitespace-nowrap`}>{e.user ?? <span className="text-ink-soft">Foldwright</span>}</td>
-              <td className={`${TD} min-w-44`}><EventMove event={e} /></td>
+              <td className={`${TD} min-w-24`}>{e.user ?? <span className="text-ink-soft">Foldwright</span>}</td>
+              <td className={`${TD} min-w-40`}><EventMove event={e} /></td>
               <td className={`${TD} whitespace-nowrap font-mono text-xs`}>{e.modelVersionId !== null ? `#${e.modelVersionId}` : "–"}</td>
               <td className={`${TD} whitespace-nowrap`}>{e.confidence !== null ? <ConfidenceBar value={e.confidence} barClassName="w-12" /> : "–"}</td>
-              <td className={`${TD} min-w-52 text-xs text-ink-soft`}>{e.reason ?? ""}</td>
+              <td className={`${TD} min-w-40 text-xs text-ink-soft`}>{e.reason ?? ""}</td>
             </tr>
           ))}
         </tbody>

@@ -17,7 +17,7 @@ export const PAGE_SIZES = [50, 100, 200] as const;
  * The filters as a GET form: submitting puts them in the address (/history?action=…), so a
  * filtered view can be bookmarked or sent, and paging keeps them. Always starts on page 1.
  */
-export function HistoryFilters({ query, exportHref }: { query: HistoryQuery; exportHref: string }) {
+export function HistoryFilters({ query, exportHref }: { query: HistoryQuery; exportHref: string | null }) {
   return (
     <Form action="/history" className="flex flex-wrap items-end gap-3 text-xs text-ink-soft" aria-label="Filter the record">
       <label className="flex flex-col gap-0.5">
@@ -55,9 +55,11 @@ export function HistoryFilters({ query, exportHref }: { query: HistoryQuery; exp
       <Link href="/history" className="py-1.5 text-sm text-verdigris hover:underline">
         Clear filters
       </Link>
-      <a href={exportHref} className="ml-auto rounded border border-paper-edge bg-white/60 px-3 py-1.5 text-sm font-medium text-ink hover:bg-paper-deep" data-testid="history-export" download>
-        Export CSV
-      </a>
+      {exportHref && (
+        <a href={exportHref} className="ml-auto rounded border border-paper-edge bg-white/60 px-3 py-1.5 text-sm font-medium text-ink hover:bg-paper-deep" data-testid="history-export" download>
+          Export CSV
+        </a>
+      )}
     </Form>
   );
 }

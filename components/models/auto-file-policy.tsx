@@ -20,9 +20,15 @@ const FIELD = "w-24 rounded border border-paper-edge bg-white px-2 py-1 text-sm 
 
 /** The office's auto-file policy: admins change it, auditors read it. */
 export function AutoFilePolicy({ settings, current, canManage, onSaved }: AutoFilePolicyProps) {
-  const [enabled, setEnabled] = useState(settings.autoFileEnabled);
-  const [target, setTarget] = useState(String(+(settings.autoFileTarget * 100).toFixed(2)));
-  const [minExamples, setMinExamples] = useState(String(settings.minExamplesPerType));
+  // Unsaved edits; null shows the saved policy (which may change under us when the screen refreshes).
+  const [draft, setDraft] = useState<{ enabled?: boolean; target?: string; minExamples?: string } | null>(null);
+  const enabled = draft?.enabled ?? settings.autoFileEnabled;
+  const target = draft?.target ?? String(+(settings.autoFileTarget * 100).toFixed(2));
+  const minExamples = draft?.minExamples ?? String(settings.minExamplesPerType);
+  const edit = (patch: NonNullable<typeof draft>) => {
+    setDraft((d) => ({ ...d, ...patch }));
+    setState((s) => ({ ...s, saved: false }));
+  };
   const [state, setState] = useState<{ busy: boolean; error: string | null; saved: boolean }>({ busy: false, error: null, saved: false });
   const dirty = enabled !== settings.autoFileEnabled || Number(target) / 100 !== settings.autoFileTarget || Number(minExamples) !== settings.minExamplesPerType;
 
@@ -33,6 +39,7 @@ export function AutoFilePolicy({ settings, current, canManage, onSaved }: AutoFi
       const body = { autoFileEnabled: enabled, autoFileTarget: Number(target) / 100, minExamplesPerType: Number(minExamples) };
       const res = await requestJson<{ settings: OfficeSettings }>("/api/settings", { method: "PATCH", body: JSON.stringify(body) });
       onSaved(res.settings);
+      setDraft(null);
       setState({ busy: false, error: null, saved: true });
     } catch (err) {
       setState({ busy: false, error: (err as Error).message, saved: false });
@@ -54,7 +61,7 @@ export function AutoFilePolicy({ settings, current, canManage, onSaved }: AutoFi
             aria-checked={enabled}
             aria-labelledby="auto-file-label"
             disabled={!canManage}
-            onClick={() => setEnabled((v) => !v)}
+            onClick={() => edit({ enabled: !enabled })}
             className={cn("relative h-6 w-11 shrink-0 rounded-full border transition-colors disabled:cursor-not-allowed", enabled ? "border-verdigris bg-verdigris" : "border-paper-edge bg-paper-deep")}
             data-testid="auto-file-switch"
           >
@@ -67,11 +74,11 @@ export function AutoFilePolicy({ settings, current, canManage, onSaved }: AutoFi
         <div className="flex flex-wrap gap-6">
           <label className="flex flex-col gap-0.5 text-xs text-ink-soft">
             Target precision (%)
-            <input type="number" min={50} max={99.99} step={0.1} value={target} onChange={(e) => setTarget(e.target.value)} disabled={!canManage} className={FIELD} data-testid="auto-file-target" />
+            <input type="number" min={50} max={99.99} step={0.1} value={target} onChange={(e) => edit({ target: e.target.value })} disabled={!canManage} className={FIELD} data-testid="auto-file-target" />
           </label>
           <label className="flex flex-col gap-0.5 text-xs text-ink-soft">
             Filed examples before the model learns a cabinet type
-            <input type="number" min={2} max={1000} step={1} value={minExamples} onChange={(e) => setMinExamples(e.target.value)} disabled={!canManage} className={FIELD} />
+            <input type="number" min={2} max={1000} step={1} value={minExamples} onChange={(e) => edit({ minExamples: e.target.value })} disabled={!canManage} className={FIELD} />
           </label>
         </div>
         <p className="text-xs text-ink-soft">
@@ -88,7 +95,7 @@ export function AutoFilePolicy({ settings, current, canManage, onSaved }: AutoFi
             <Button type="submit" disabled={state.busy || !dirty} data-testid="save-policy">
               {state.busy ? "Saving…" : "Save policy"}
             </Button>
-            {state.saved && !dirty && <span role="status" className="text-xs text-verdigris-dark">Saved.</span>}
+            {state.saved && <span role="status" className="text-xs text-verdigris-dark">Saved.</span>}
             {dirty && !state.busy && <span className="text-xs text-ink-soft">Not saved yet.</span>}
           </div>
         ) : (

@@ -82,11 +82,10 @@ export function ModelsBoard({ initial, canManage, children }: ModelsBoardProps) 
       {current && children}
 
       <AutoFilePolicy
-        key={JSON.stringify(overview.settings)}
         settings={overview.settings}
         current={current}
         canManage={canManage}
-        onSaved={(settings) => void mutate({ ...overview, settings }, { revalidate: false })}
+        onSaved={(settings) => void mutate({ ...overview, settings })}
       />
 
       {overview.versions.length > 0 && <VersionsTable versions={overview.versions} canManage={canManage} onMakeCurrent={setPromoting} />}

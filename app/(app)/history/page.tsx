@@ -22,6 +22,12 @@ function dayAfter(date: string): string {
   return d.toISOString().slice(0, 10);
 }
 
+/** 2026-02-30 has the right shape but is no day: the database would not compare it as a date. */
+function isCalendarDate(date: string): boolean {
+  const d = new Date(`${date}T00:00:00Z`);
+  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === date;
+}
+
 /** Single, non-empty values only: an empty form field means "any". */
 function readQuery(sp: SearchParams): Record<string, string> {
   const out: Record<string, string> = {};
@@ -37,7 +43,9 @@ export default async function HistoryPage({ searchParams }: { searchParams: Prom
   if (!allowed) forbidden();
   const raw = readQuery(await searchParams);
   const query: HistoryQuery = { action: raw.action, document: raw.document, from: raw.from, to: raw.to, pageSize: raw.pageSize };
-  const parsed = eventsSchema.safeParse({ ...raw, format: undefined });
+  const parsed = eventsSchema
+    .refine((f) => [f.from, f.to].every((d) => d === undefined || isCalendarDate(d)), { message: "A date in the filters does not exist on the calendar." })
+    .safeParse({ ...raw, format: undefined });
 
   const filters = new URLSearchParams();
   for (const key of ["action", "document", "from", "to", "pageSize"] as const) if (query[key]) filters.set(key, query[key]!);
@@ -77,7 +85,7 @@ export default async function HistoryPage({ searchParams }: { searchParams: Prom
           never changed or removed. Times are in UTC.
         </p>
       </div>
-      <HistoryFilters query={query} exportHref={exportHref} />
+      <HistoryFilters query={query} exportHref={parsed.success ? exportHref : null} />
       {!parsed.success && (
         <Notice tone="error" title="These filters cannot be used">
           {parsed.error.issues[0]?.message ?? "Check the filters."} Change them above, or clear them to see the whole record.

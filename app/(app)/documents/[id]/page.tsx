@@ -57,7 +57,7 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
           <Timeline events={timeline} />
         </div>
         <aside className="lg:sticky lg:top-6 lg:self-start">
-          <SuggestionPanel suggestion={suggestion} />
+          <SuggestionPanel suggestion={suggestion} state={state} />
         </aside>
       </div>
     </article>
