@@ -1,27 +1,8 @@
-// Shapes of the JSON the To review screen reads (see lib/data/review.ts and filing-record.ts).
-export interface QueueItem {
-  id: number;
-  name: string;
-  status: "ready" | "unreadable";
-  reason: string | null;
-  uploadedAt: string;
-  pageCount: number | null;
-  ocrUsed: boolean;
-  filedHow: string | null;
-  suggestion: null | {
-    method: "model" | "cold_start" | "blended";
-    modelVersionId: number | null;
-    cabinetTypeId: number | null;
-    cabinetType: string | null;
-    confidence: number | null;
-    noConfidentMatch: boolean;
-    matterId: number | null;
-    matter: string | null;
-    matterAmbiguous: boolean;
-  };
-  filedIn: null | { cabinetTypeId: number; cabinetType: string; matterId: number; matter: string };
-}
+// Shapes of the JSON the To review screen reads. Type-only imports from the Data Access Layer
+// are erased at build time, so no server code reaches the browser.
+import type { QueueItem } from "@/lib/data/review";
 
+export type { QueueItem };
 export interface QueuePage {
   items: QueueItem[];
   total: number;

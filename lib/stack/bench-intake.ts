@@ -4,6 +4,7 @@
 // and per OCR page, and the web server's memory over the run. Uses its own database and bucket
 // (foldwright_bench) on the local servers and removes them afterwards. Figures, not a test.
 import fs from "node:fs";
+import { loadAverage, percentile } from "@/lib/stack/stats";
 import crypto from "node:crypto";
 import { createCanvas } from "@napi-rs/canvas";
 import PDFKit from "pdfkit";
@@ -74,10 +75,6 @@ async function makeSamples(): Promise<Sample[]> {
   return samples;
 }
 
-function percentile(values: number[], p: number): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
-}
 
 function rssMb(pid: number): number {
   const status = fs.readFileSync(`/proc/${pid}/status`, "utf8");
@@ -169,7 +166,7 @@ async function main(): Promise<void> {
       },
       serverRssMbEvery20Uploads: memory.map((m) => Math.round(m)),
       goals: "upload p95 < 300 ms for a 1 MB file; text PDF < 50 ms/page; OCR < 4 s/page on one core; memory flat",
-      machine: { cores: (await import("node:os")).cpus().length, loadavg: fs.readFileSync("/proc/loadavg", "utf8").trim() },
+      machine: { cores: (await import("node:os")).cpus().length, loadavg: loadAverage() },
     };
     console.log(JSON.stringify(report, null, 2));
   } finally {

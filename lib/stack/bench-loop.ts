@@ -5,6 +5,7 @@
 // latency for a page of 50 through a production build (p50/p95). Figures, not a test.
 import crypto from "node:crypto";
 import fs from "node:fs";
+import { loadAverage, percentile } from "@/lib/stack/stats";
 
 process.env.DATABASE_NAME ??= "foldwright_bench_loop";
 process.env.S3_BUCKET ??= "foldwright-bench";
@@ -16,10 +17,6 @@ const TOTAL = Number(process.argv[2] ?? 10_000);
 const CLASSES = 30;
 const UNFILED = 500;
 
-function percentile(values: number[], p: number): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
-}
 
 function peakRssMb(): number {
   return Number(/VmHWM:\s+(\d+)/.exec(fs.readFileSync("/proc/self/status", "utf8"))![1]) / 1024;
@@ -123,7 +120,7 @@ async function main(): Promise<void> {
           suggestion: { documents: suggestMs.length, p50Ms: +percentile(suggestMs, 50).toFixed(1), p95Ms: +percentile(suggestMs, 95).toFixed(1) },
           reviewQueuePageOf50: { requests: queueMs.length, p50Ms: +percentile(queueMs, 50).toFixed(1), p95Ms: +percentile(queueMs, 95).toFixed(1) },
           goals: "suggestion p95 < 50 ms; queue page p95 < 150 ms; retrain < 60 s and < 1.5 GB",
-          machine: { loadavg: fs.readFileSync("/proc/loadavg", "utf8").trim() },
+          machine: { loadavg: loadAverage() },
         },
         null,
         2,
