@@ -1,5 +1,5 @@
 import type { SuggestionDetail } from "@/lib/data/filing-record";
-import { ConfidenceBar } from "./confidence-bar";
+import { ConfidenceBar } from "@/components/ui/confidence-bar";
 import type { DocumentState } from "./document-state";
 import { formatUtc } from "./format";
 

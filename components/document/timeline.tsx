@@ -1,7 +1,7 @@
 import type { FilingEvent } from "@/lib/data/filing-record";
 import { actionWords } from "@/components/history/action-words";
 import { EventMove } from "@/components/history/event-move";
-import { ConfidenceBar } from "./confidence-bar";
+import { ConfidenceBar } from "@/components/ui/confidence-bar";
 import { formatUtc } from "./format";
 
 /** The document's filing record, oldest first. */

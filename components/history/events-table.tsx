@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { FilingEvent } from "@/lib/data/filing-record";
-import { ConfidenceBar } from "@/components/document/confidence-bar";
+import { ConfidenceBar } from "@/components/ui/confidence-bar";
 import { formatUtc } from "@/components/document/format";
 import { actionWords } from "./action-words";
 import { EventMove } from "./event-move";

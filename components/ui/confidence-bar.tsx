@@ -1,5 +1,4 @@
 import { cn } from "@/lib/utils";
-import { formatPercent } from "./format";
 
 interface ConfidenceBarProps {
   value: number;
@@ -13,7 +12,7 @@ export function ConfidenceBar({ value, barClassName = "w-16", className }: Confi
   const clamped = Math.max(0, Math.min(1, value));
   return (
     <span className={cn("inline-flex items-center gap-2", className)}>
-      <span className="w-9 text-right font-mono text-xs tabular-nums">{formatPercent(clamped)}</span>
+      <span className="w-9 text-right font-mono text-xs tabular-nums">{Math.round(clamped * 100)}%</span>
       <span aria-hidden="true" className={cn("h-1 rounded-full bg-paper-deep", barClassName)}>
         <span className="block h-1 rounded-full bg-verdigris" style={{ width: `${clamped * 100}%` }} />
       </span>
