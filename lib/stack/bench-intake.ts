@@ -14,6 +14,7 @@ process.env.S3_BUCKET ??= "foldwright-bench";
 process.env.PORT ??= "3200";
 process.env.SESSION_SECRET ??= crypto.randomBytes(32).toString("hex");
 process.env.UPLOAD_MAX_BYTES ??= String(50 * 1024 * 1024);
+process.env.SEED_DEMO_DOCUMENTS = "false"; // only the benchmark's own documents are measured
 
 const TOTAL = Number(process.argv[2] ?? 200);
 const WORDS = "agreement invoice statement notice payment balance account tenant landlord schedule clause period amount trustee minutes resolution".split(" ");
@@ -69,7 +70,9 @@ async function makeSamples(): Promise<Sample[]> {
     } else if (slot === 8) {
       samples.push({ kind: "mb-pdf", name: `exhibit-${i}.pdf`, bytes: await megabytePdf(i) });
     } else {
-      samples.push({ kind: "scan", name: `scan-${i}.png`, bytes: await renderTextPng([`Notice ${stamp}`, paragraph(i, 8), paragraph(i + 1, 8), paragraph(i + 2, 8)]) });
+      // A dense scanned page: 26 lines of about nine words, like a typed A4 letter.
+      const lines = [`Notice ${stamp}`, ...Array.from({ length: 25 }, (_, l) => paragraph(i + l, 9))];
+      samples.push({ kind: "scan", name: `scan-${i}.png`, bytes: await renderTextPng(lines) });
     }
   }
   return samples;
