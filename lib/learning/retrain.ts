@@ -11,7 +11,7 @@ import { getOfficeSettings } from "@/lib/data/settings";
 import { loadTrainingSet, type TrainingRow } from "@/lib/data/training-set";
 import { resolveOptions, saveModel, trainModel, type TrainOptionsInput } from "@/lib/ml";
 import { putObject } from "@/storage/s3";
-import { chooseFolds, scoreOnFolds } from "@/lib/learning/evaluate-candidate";
+import { chooseFolds, describeEvaluation, scoreOnFolds } from "@/lib/learning/evaluate-candidate";
 import { TRAIN_JOB } from "@/lib/jobs/kinds";
 
 export const PROMOTION_MARGIN = 0.01; // "not more than one point lower" (DESIGN §5)
@@ -86,7 +86,7 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}):
         throw new Error(`Too few filed documents to train: at least two cabinet types need ${settings.minExamplesPerType} human-filed documents each (found ${classes.length}).`);
       }
       const folds = chooseFolds(labels);
-      await progress(`Cross-validating on ${docs.length} documents (${folds} folds)`);
+      await progress(`Evaluating by ${describeEvaluation(docs.length, folds)}`);
       const report = await scoreOnFolds(docs, folds, DEFAULT_PARAMS, settings.autoFileTarget);
 
       const current = await findCurrentModelParams();
