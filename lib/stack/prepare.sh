@@ -6,7 +6,8 @@ mode="${1:-start}"
 cd "$(dirname "$0")/../.."
 
 need=()
-command -v mariadbd >/dev/null 2>&1 || [ -x /usr/sbin/mariadbd ] || need+=(mariadb-server)
+# Both the server and its data-directory tool: a half-removed install has one without the other.
+{ [ -x /usr/sbin/mariadbd ] || command -v mariadbd >/dev/null 2>&1; } && command -v mariadb-install-db >/dev/null 2>&1 || need+=(mariadb-server)
 if [ "$mode" = "test" ]; then
   command -v chromium >/dev/null 2>&1 || need+=(chromium)
   command -v qpdf >/dev/null 2>&1 || need+=(qpdf)
