@@ -11,7 +11,9 @@ need=()
 if [ "$mode" = "test" ]; then
   command -v chromium >/dev/null 2>&1 || need+=(chromium)
   command -v qpdf >/dev/null 2>&1 || need+=(qpdf)
-  python3 -c 'import sklearn' >/dev/null 2>&1 || /usr/bin/python3 -c 'import sklearn' >/dev/null 2>&1 || need+=(python3-sklearn)
+  # Debian's python3 (not a pyenv one on PATH), and a real import: a bare "import sklearn" can
+  # pass on the leftovers of a removed package.
+  /usr/bin/python3 -c 'from sklearn.linear_model import LogisticRegression' >/dev/null 2>&1 || need+=(python3-sklearn)
 fi
 
 if [ ${#need[@]} -gt 0 ]; then
