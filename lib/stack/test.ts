@@ -28,7 +28,7 @@ let ok = true;
 if (!only.length) {
   const lint = step("lint (eslint)", bin("eslint"), [".", "--max-warnings=0"]);
   const types = step("type-check (tsc)", bin("tsc"), ["--noEmit", "-p", "."]);
-  passed += Number(lint) + Number(types);
+  // Lint and type-check are not tests: they count only when they fail.
   failed += Number(!lint) + Number(!types);
   ok = lint && types;
 }
