@@ -13,7 +13,9 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" },
+        // A generous per-test limit: some unit tests start scikit-learn or OCR, which is slow the
+        // first time on a fresh machine. It guards against hangs; it is not a speed check.
+        test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node", testTimeout: 60_000 },
       },
       {
         extends: true,
