@@ -27,13 +27,14 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
   const [dir, setDir] = useState<"asc" | "desc">("asc");
   const [cabinetType, setCabinetType] = useState("");
   const [matter, setMatter] = useState("");
+  const [confidence, setConfidence] = useState(""); // "", "below:0.5", "above:0.9" …
   const [selectedId, setSelectedId] = useState<number | null>(null);
   const [checked, setChecked] = useState<Set<number>>(new Set());
   const [bar, setBar] = useState(0.9);
   const [message, setMessage] = useState<{ tone: "info" | "error"; text: string } | null>(null);
   const pickerRef = useRef<HTMLInputElement>(null);
 
-  const key = `/api/review?list=${list}&sort=${sort}&dir=${dir}&pageSize=200${cabinetType ? `&cabinetType=${cabinetType}` : ""}${matter ? `&matter=${matter}` : ""}`;
+  const key = `/api/review?list=${list}&sort=${sort}&dir=${dir}&pageSize=200${cabinetType ? `&cabinetType=${cabinetType}` : ""}${matter ? `&matter=${matter}` : ""}${confidence ? `&${confidence.startsWith("below") ? "maxConfidence" : "minConfidence"}=${confidence.split(":")[1]}` : ""}`;
   const { data, error, mutate, isLoading } = useSWR<QueuePage>(key, getJson, { refreshInterval: 5000 });
   const items = useMemo(() => data?.items ?? [], [data]);
   const selected = items.find((i) => i.id === selectedId) ?? items[0] ?? null;
@@ -139,6 +140,16 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
             <select value={matter} onChange={(e) => setMatter(e.target.value)} className="rounded border border-paper-edge bg-white px-1 py-0.5">
               <option value="">all</option>
               {matters.map((m) => <option key={m.id} value={m.id}>{m.number}</option>)}
+            </select>
+          </label>
+          <label>
+            Confidence{" "}
+            <select value={confidence} onChange={(e) => setConfidence(e.target.value)} className="rounded border border-paper-edge bg-white px-1 py-0.5">
+              <option value="">any</option>
+              <option value="above:0.9">90% and above</option>
+              <option value="above:0.7">70% and above</option>
+              <option value="below:0.7">below 70%</option>
+              <option value="below:0.5">below 50%</option>
             </select>
           </label>
           <span className="ml-auto text-ink-soft">{data ? `${data.total} waiting` : ""}</span>
