@@ -40,6 +40,9 @@ export async function up(knex: Knex): Promise<void> {
     t.json("ranked").notNullable(); // [{cabinetTypeId, confidence, probability, source}]
     t.integer("top_cabinet_type_id").unsigned().nullable().references("cabinet_types.id");
     t.decimal("top_confidence", 6, 4).nullable();
+    // The model's own confidence in the top type, before description ranks were blended in:
+    // what the auto-file bar (measured on the model alone) is compared with.
+    t.decimal("model_confidence", 6, 4).nullable();
     t.boolean("no_confident_match").notNullable().defaultTo(false);
     t.json("why").notNullable(); // [{term, weight}]
     t.json("matter_candidates").notNullable(); // [{matterId, score, reasons}]

@@ -23,6 +23,8 @@ export interface NewSuggestion {
   method: "model" | "cold_start" | "blended";
   ranked: RankedType[];
   noConfidentMatch: boolean;
+  /** The model's confidence in the top type before blending; null without a model. */
+  modelConfidence: number | null;
   why: { term: string; weight: number }[];
   matterCandidates: MatterCandidate[];
   topMatterId: number | null;
@@ -54,6 +56,7 @@ async function insertSuggestion(trx: Knex.Transaction, s: NewSuggestion): Promis
     ranked: JSON.stringify(s.ranked),
     top_cabinet_type_id: top?.cabinetTypeId ?? null,
     top_confidence: top?.confidence ?? null,
+    model_confidence: s.modelConfidence,
     no_confident_match: s.noConfidentMatch,
     why: JSON.stringify(s.why),
     matter_candidates: JSON.stringify(s.matterCandidates),

@@ -1,5 +1,6 @@
-// The model this process serves. Every few seconds it asks the database which version is
-// current, so every app instance picks up a promotion or a rollback without a restart.
+// The model this process serves. Each use asks the database which version is current (one
+// indexed row) and loads the artifact only when that changed, so every app instance serves a
+// promotion or a rollback from its next suggestion on, without a restart.
 import { findCurrentModel } from "@/lib/data/models";
 import { loadModel, type FoldwrightModel } from "@/lib/ml";
 import { getObjectBytes } from "@/storage/s3";
@@ -10,12 +11,10 @@ export interface ServingModel {
   autoFileThreshold: number | null;
 }
 
-const CHECK_EVERY_MS = 5_000;
-const state = globalThis as unknown as { foldwrightServing?: { model: ServingModel | null; checkedAt: number } };
+const state = globalThis as unknown as { foldwrightServing?: { model: ServingModel | null } };
 
-export async function getServingModel(now = Date.now()): Promise<ServingModel | null> {
+export async function getServingModel(): Promise<ServingModel | null> {
   const cached = state.foldwrightServing;
-  if (cached && now - cached.checkedAt < CHECK_EVERY_MS) return cached.model;
   const row = await findCurrentModel();
   let model: ServingModel | null = null;
   if (row && cached?.model?.versionId === row.id) model = cached.model;
@@ -23,7 +22,7 @@ export async function getServingModel(now = Date.now()): Promise<ServingModel | 
     const loaded = loadModel(new Uint8Array(await getObjectBytes(row.artifactKey)));
     model = { versionId: row.id, model: loaded, autoFileThreshold: row.autoFileThreshold };
   }
-  state.foldwrightServing = { model, checkedAt: now };
+  state.foldwrightServing = { model };
   return model;
 }
 

@@ -21,6 +21,7 @@ export async function computeSuggestion(doc: DocumentForSuggestion): Promise<New
   let method: NewSuggestion["method"] = "cold_start";
   let why: NewSuggestion["why"] = cold.terms.map((term) => ({ term, weight: 0 }));
   let noConfidentMatch = false;
+  let modelTop: { cabinetTypeId: number; confidence: number } | null = null;
   if (serving) {
     const prediction = predictDocument(serving.model, mlDoc, 6);
     const counts = serving.model.counts;
@@ -32,6 +33,7 @@ export async function computeSuggestion(doc: DocumentForSuggestion): Promise<New
     method = coldTypeIds.length ? "blended" : "model";
     why = prediction.why.map((w) => ({ term: w.term, weight: w.contribution }));
     noConfidentMatch = prediction.noConfidentMatch;
+    modelTop = modelRanked[0] ?? null;
   } else {
     ranked = cold.ranked.map((r) => ({ cabinetTypeId: r.cabinetTypeId, confidence: r.confidence, probability: null, source: "description" as const }));
   }
@@ -39,13 +41,17 @@ export async function computeSuggestion(doc: DocumentForSuggestion): Promise<New
   const candidates = matchMatters(text, doc.original_name, matters);
   const decision = decideMatter(candidates);
   const top = ranked[0];
+  // The bar was measured on the model's own confidences, so it is compared with the model's
+  // confidence in the top type, not the blended one (which gives untrained types a share).
+  const modelConfidence = modelTop && top?.cabinetTypeId === modelTop.cabinetTypeId ? modelTop.confidence : null;
   const autoFile =
     settings.autoFileEnabled &&
     serving !== null &&
     serving.autoFileThreshold !== null &&
     top?.source === "model" &&
     !noConfidentMatch &&
-    top.confidence >= serving.autoFileThreshold &&
+    modelConfidence !== null &&
+    modelConfidence >= serving.autoFileThreshold &&
     decision.matterId !== null &&
     !decision.ambiguous;
 
@@ -55,6 +61,7 @@ export async function computeSuggestion(doc: DocumentForSuggestion): Promise<New
     method,
     ranked,
     noConfidentMatch,
+    modelConfidence,
     why,
     matterCandidates: candidates.slice(0, 5),
     topMatterId: decision.matterId,

@@ -12,6 +12,9 @@ const VOCAB: Record<string, string[]> = {
 
 export const TRAINING_TYPES = Object.keys(VOCAB);
 
+// Fixed seeds (not random) so every run arranges the same texts.
+let nextSeed = 1_000;
+
 function textFor(type: string, seed: number, noise = 0): string {
   const words = VOCAB[type];
   const others = Object.values(VOCAB).flat();
@@ -34,7 +37,8 @@ export async function insertFiledDocuments(db: Knex, perType: number, options: {
   const clerk = await db("users").where({ email: "clerk@example.com" }).first("id");
   const matter = await db("matters").where({ number: "AQ-2026-0101" }).first("id");
   const out: number[] = [];
-  let seed = Math.floor(Math.random() * 1e6);
+  let seed = nextSeed;
+  nextSeed += 10_000;
   for (const type of TRAINING_TYPES) {
     for (let i = 0; i < perType; i++) {
       const text = textFor(type, seed++, options.noise ?? 0.15);
@@ -64,7 +68,7 @@ export async function insertFiledDocuments(db: Knex, perType: number, options: {
 /** Inserts a read, unfiled document of the given type's wording; returns its id. */
 export async function insertUnfiledDocument(db: Knex, type: string, extra = ""): Promise<number> {
   const clerk = await db("users").where({ email: "clerk@example.com" }).first("id");
-  const text = `${textFor(type, Math.floor(Math.random() * 1e6), 0)} ${extra}`;
+  const text = `${textFor(type, nextSeed++, 0)} ${extra}`;
   const [id] = await db("documents").insert({
     sha256: crypto.createHash("sha256").update(text + crypto.randomUUID()).digest("hex"),
     original_name: `incoming-${crypto.randomUUID().slice(0, 8)}.pdf`,

@@ -56,7 +56,6 @@ describe("retraining", () => {
     expect(v.train_count).toBeGreaterThanOrEqual(TRAINING_TYPES.length * 15);
     expect(typeof v.class_list === "string" ? JSON.parse(v.class_list) : v.class_list).toHaveLength(TRAINING_TYPES.length);
     expect((await headObject(v.artifact_key))?.size).toBe(v.artifact_bytes);
-    forgetServingModel();
     expect((await getServingModel())?.versionId).toBe(id);
   });
 
@@ -94,7 +93,6 @@ describe("retraining", () => {
       g.foldwrightS3 = real;
     }
     expect(await currentId()).toBe(before);
-    forgetServingModel();
     expect((await getServingModel())?.versionId).toBe(before);
   });
 
@@ -106,7 +104,6 @@ describe("retraining", () => {
     await promoteModelVersion(first, null, "Rolled back by the test.");
     expect(await currentId()).toBe(first);
     expect((await version(id)).status).toBe("retired");
-    forgetServingModel();
     expect((await getServingModel())?.versionId).toBe(first);
   });
 
@@ -121,6 +118,18 @@ describe("retraining", () => {
       // Mixed wording: the model should be unsure of these.
       docs.push(await insertUnfiledDocument(owner, "Payroll records", "invoice statement period lease gross pay agreement amount due. Matter AQ-2026-0101."));
       docs.push(await insertUnfiledDocument(owner, "Bank & card statements", "lease invoice payroll deposits landlord. Matter AQ-2026-0101."));
+      // Nothing the model learned: its confidence must stay below the bar.
+      const [unrelated] = await owner("documents").insert({
+        sha256: "0".repeat(63) + "1",
+        original_name: "garden-notes.pdf",
+        media_type: "application/pdf",
+        size_bytes: 80,
+        storage_key: "test/garden-notes",
+        status: "ready",
+        text: "Garden committee notes: tulips, benches, compost and the spring planting rota. Matter AQ-2026-0101.",
+        uploaded_by: (await owner("users").where({ email: "clerk@example.com" }).first("id")).id,
+      });
+      docs.push(unrelated);
       for (const id of docs) {
         const doc = await findDocumentForSuggestion(id);
         await saveSuggestion(null, null, await computeSuggestion(doc!));
@@ -128,11 +137,13 @@ describe("retraining", () => {
       const rows = await owner("documents as d")
         .join("suggestions as s", "s.document_id", "d.id")
         .whereIn("d.id", docs)
-        .select("d.id", "d.filed_how", "s.top_confidence", "s.no_confident_match", "s.top_matter_id", "s.matter_ambiguous");
-      const expected = rows.map((r) => Number(r.top_confidence) >= bar && !r.no_confident_match && r.top_matter_id !== null && !r.matter_ambiguous);
+        .select("d.id", "d.filed_how", "s.model_confidence", "s.no_confident_match", "s.top_matter_id", "s.matter_ambiguous");
+      const expected = rows.map((r) => r.model_confidence !== null && Number(r.model_confidence) >= bar && !r.no_confident_match && r.top_matter_id !== null && !r.matter_ambiguous);
       expect(rows.map((r) => r.filed_how === "auto")).toEqual(expected);
       expect(expected.some(Boolean)).toBe(true);
-      expect(expected.some((x) => !x)).toBe(true);
+      const garden = rows.find((r) => r.id === unrelated)!;
+      expect(Number(garden.model_confidence)).toBeLessThan(bar);
+      expect(garden.filed_how).toBeNull();
       const auto = rows.filter((r) => r.filed_how === "auto").map((r) => r.id);
       expect(await owner("filing_events").whereIn("document_id", auto).where({ action: "auto_filed" }).count({ n: "*" })).toEqual([{ n: auto.length }]);
     } finally {

@@ -22,6 +22,7 @@ async function suggest(documentId: number, cabinetTypeId: number, confidence: nu
     method: "cold_start",
     ranked: [{ cabinetTypeId, confidence, probability: null, source: "description" }],
     noConfidentMatch: false,
+    modelConfidence: null,
     why: [],
     matterCandidates: [],
     topMatterId: matterId,
