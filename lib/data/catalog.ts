@@ -2,6 +2,7 @@ import "server-only";
 // Cabinet types and matters as the screens and the suggester need them.
 import { getDb } from "@/db";
 import type { CurrentUser } from "@/lib/data/users";
+import type { MatterRecord } from "@/lib/filing/match-matter";
 
 export interface CabinetTypeOption {
   id: number;
@@ -11,15 +12,8 @@ export interface CabinetTypeOption {
   active: boolean;
 }
 
-export interface MatterOption {
-  id: number;
-  number: string;
-  title: string;
-  clientName: string;
-  aliases: string[];
-  emailDomains: string[];
-  taxIdLast4: string | null;
-  status: "open" | "closed";
+/** A matter with what the matter matcher reads, and whether it is behind an ethical wall. */
+export interface MatterOption extends MatterRecord {
   restricted: boolean;
 }
 

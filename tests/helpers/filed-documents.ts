@@ -31,6 +31,25 @@ export async function typeIds(db: Knex): Promise<Map<string, number>> {
   return new Map((await db("cabinet_types").select("id", "name")).map((r) => [r.name, r.id]));
 }
 
+/** One read document row with this text (filed when `filing` is given); returns its id. */
+export async function insertReadDocument(db: Knex, text: string, name: string, filing: Record<string, unknown> = {}): Promise<number> {
+  const clerk = await db("users").where({ email: "clerk@example.com" }).first("id");
+  const [id] = await db("documents").insert({
+    sha256: crypto.createHash("sha256").update(text + crypto.randomUUID()).digest("hex"),
+    original_name: name,
+    media_type: "application/pdf",
+    size_bytes: text.length,
+    storage_key: `test/${crypto.randomUUID()}`,
+    status: "ready",
+    text,
+    page_count: 1,
+    char_count: text.length,
+    uploaded_by: clerk.id,
+    ...filing,
+  });
+  return id;
+}
+
 /** Inserts `perType` human-filed documents for each training type; returns their ids. */
 export async function insertFiledDocuments(db: Knex, perType: number, options: { noise?: number; how?: string } = {}): Promise<number[]> {
   const ids = await typeIds(db);
@@ -42,44 +61,14 @@ export async function insertFiledDocuments(db: Knex, perType: number, options: {
   for (const type of TRAINING_TYPES) {
     for (let i = 0; i < perType; i++) {
       const text = textFor(type, seed++, options.noise ?? 0.15);
-      const [id] = await db("documents").insert({
-        sha256: crypto.createHash("sha256").update(text + crypto.randomUUID()).digest("hex"),
-        original_name: `${type.split(" ")[0].toLowerCase()}-${seed}.pdf`,
-        media_type: "application/pdf",
-        size_bytes: text.length,
-        storage_key: `test/${crypto.randomUUID()}`,
-        status: "ready",
-        text,
-        page_count: 1,
-        char_count: text.length,
-        uploaded_by: clerk.id,
-        cabinet_type_id: ids.get(type),
-        matter_id: matter.id,
-        filed_by: clerk.id,
-        filed_at: new Date(),
-        filed_how: options.how ?? "by_hand",
-      });
-      out.push(id);
+      const filing = { cabinet_type_id: ids.get(type), matter_id: matter.id, filed_by: clerk.id, filed_at: new Date(), filed_how: options.how ?? "by_hand" };
+      out.push(await insertReadDocument(db, text, `${type.split(" ")[0].toLowerCase()}-${seed}.pdf`, filing));
     }
   }
   return out;
 }
 
 /** Inserts a read, unfiled document of the given type's wording; returns its id. */
-export async function insertUnfiledDocument(db: Knex, type: string, extra = ""): Promise<number> {
-  const clerk = await db("users").where({ email: "clerk@example.com" }).first("id");
-  const text = `${textFor(type, nextSeed++, 0)} ${extra}`;
-  const [id] = await db("documents").insert({
-    sha256: crypto.createHash("sha256").update(text + crypto.randomUUID()).digest("hex"),
-    original_name: `incoming-${crypto.randomUUID().slice(0, 8)}.pdf`,
-    media_type: "application/pdf",
-    size_bytes: text.length,
-    storage_key: `test/${crypto.randomUUID()}`,
-    status: "ready",
-    text,
-    page_count: 1,
-    char_count: text.length,
-    uploaded_by: clerk.id,
-  });
-  return id;
+export function insertUnfiledDocument(db: Knex, type: string, extra = ""): Promise<number> {
+  return insertReadDocument(db, `${textFor(type, nextSeed++, 0)} ${extra}`, `incoming-${crypto.randomUUID().slice(0, 8)}.pdf`);
 }

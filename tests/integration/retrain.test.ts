@@ -8,7 +8,7 @@ import { findDocumentForSuggestion, saveSuggestion } from "@/lib/data/suggestion
 import { computeSuggestion } from "@/lib/learning/suggest";
 import { headObject } from "@/storage/s3";
 import { ownerDb } from "../helpers/db";
-import { insertFiledDocuments, insertUnfiledDocument, TRAINING_TYPES } from "../helpers/filed-documents";
+import { insertFiledDocuments, insertReadDocument, insertUnfiledDocument, TRAINING_TYPES } from "../helpers/filed-documents";
 
 // Retraining end to end against the real MariaDB and S3 fake: train, evaluate, promote; refuse
 // a worse candidate; one run at a time; a failed run leaves the current model serving; rollback.
@@ -119,16 +119,7 @@ describe("retraining", () => {
       docs.push(await insertUnfiledDocument(owner, "Payroll records", "invoice statement period lease gross pay agreement amount due. Matter AQ-2026-0101."));
       docs.push(await insertUnfiledDocument(owner, "Bank & card statements", "lease invoice payroll deposits landlord. Matter AQ-2026-0101."));
       // Nothing the model learned: its confidence must stay below the bar.
-      const [unrelated] = await owner("documents").insert({
-        sha256: "0".repeat(63) + "1",
-        original_name: "garden-notes.pdf",
-        media_type: "application/pdf",
-        size_bytes: 80,
-        storage_key: "test/garden-notes",
-        status: "ready",
-        text: "Garden committee notes: tulips, benches, compost and the spring planting rota. Matter AQ-2026-0101.",
-        uploaded_by: (await owner("users").where({ email: "clerk@example.com" }).first("id")).id,
-      });
+      const unrelated = await insertReadDocument(owner, "Garden committee notes: tulips, benches, compost and the spring planting rota. Matter AQ-2026-0101.", "garden-notes.pdf");
       docs.push(unrelated);
       for (const id of docs) {
         const doc = await findDocumentForSuggestion(id);
