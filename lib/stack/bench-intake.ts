@@ -5,6 +5,7 @@
 // (foldwright_bench) on the local servers and removes them afterwards. Figures, not a test.
 import fs from "node:fs";
 import { loadAverage, percentile } from "@/lib/stack/stats";
+import { openBenchStack, runBench } from "@/lib/stack/bench-stack";
 import crypto from "node:crypto";
 import { createCanvas } from "@napi-rs/canvas";
 import PDFKit from "pdfkit";
@@ -85,15 +86,9 @@ function rssMb(pid: number): number {
 }
 
 async function main(): Promise<void> {
-  const { env } = await import("@/lib/env");
-  const { startServices } = await import("@/lib/stack/services");
-  const { dropDatabase } = await import("@/db/local-server");
-  const { migrateDatabase, seedDatabase } = await import("@/db/migrate");
+  const stack = await openBenchStack();
+  const { env } = stack;
   const { buildApp, serveApp } = await import("@/lib/stack/app-server");
-  const services = await startServices([env.s3.bucket]);
-  await dropDatabase(env.db.name);
-  await migrateDatabase(env.db.name);
-  await seedDatabase(env.db.name);
   await buildApp(".next");
   const server = await serveApp({ distDir: ".next", port: env.port, quiet: true, env: { JOBS_ENABLED: "false" } });
   const url = server.url;
@@ -126,7 +121,7 @@ async function main(): Promise<void> {
     console.log("Reading everything with one worker (concurrency 1) …");
     const { startWorkers } = await import("@/lib/jobs/worker");
     const { readJob } = await import("@/lib/jobs/read-job");
-    const { getDb, closeDb } = await import("@/db");
+    const { getDb } = await import("@/db");
     const { shutdownOcr } = await import("@/lib/intake");
     const readStart = performance.now();
     const workers = startWorkers({ handlers: { read: readJob }, concurrency: 1, pollMs: 100, leaseSeconds: 300, log: () => {} });
@@ -149,7 +144,6 @@ async function main(): Promise<void> {
     const perTextPage = textPdf.reduce((a, r) => a + r.read_ms, 0) / textPdf.reduce((a, r) => a + r.page_count, 0);
     const perOcrPage = ocr.reduce((a, r) => a + r.read_ms, 0) / ocr.reduce((a, r) => a + r.ocr_pages, 0);
     await shutdownOcr();
-    await closeDb();
 
     const report = {
       documents: TOTAL,
@@ -174,17 +168,8 @@ async function main(): Promise<void> {
     console.log(JSON.stringify(report, null, 2));
   } finally {
     await server.stop();
-    const { emptyBucket } = await import("@/tests/helpers/storage");
-    await emptyBucket(env.s3.bucket).catch(() => {});
-    await dropDatabase(env.db.name).catch(() => {});
-    await services.stop();
+    await stack.close();
   }
 }
 
-main().then(
-  () => process.exit(0),
-  (e) => {
-    console.error(e);
-    process.exit(1);
-  },
-);
+runBench(main);

@@ -6,6 +6,7 @@
 import crypto from "node:crypto";
 import fs from "node:fs";
 import { loadAverage, percentile } from "@/lib/stack/stats";
+import { openBenchStack, runBench } from "@/lib/stack/bench-stack";
 
 process.env.DATABASE_NAME ??= "foldwright_bench_loop";
 process.env.S3_BUCKET ??= "foldwright-bench";
@@ -15,7 +16,7 @@ process.env.SEED_DEMO_DOCUMENTS = "false";
 
 const TOTAL = Number(process.argv[2] ?? 10_000);
 const CLASSES = 30;
-const UNFILED = 500;
+const UNFILED = Math.min(500, Math.floor(TOTAL / 20)); // 500 of 10,000; fewer in a quick run
 
 
 function peakRssMb(): number {
@@ -23,16 +24,10 @@ function peakRssMb(): number {
 }
 
 async function main(): Promise<void> {
-  const { env } = await import("@/lib/env");
-  const { startServices } = await import("@/lib/stack/services");
-  const { dropDatabase } = await import("@/db/local-server");
-  const { migrateDatabase, seedDatabase } = await import("@/db/migrate");
-  const { getDb, closeDb } = await import("@/db");
+  const stack = await openBenchStack();
+  const { env } = stack;
+  const { getDb } = await import("@/db");
   const { generateSyntheticTexts } = await import("@/lib/demo/synthetic-texts");
-  const services = await startServices([env.s3.bucket]);
-  await dropDatabase(env.db.name);
-  await migrateDatabase(env.db.name);
-  await seedDatabase(env.db.name);
   const db = getDb();
   try {
     console.log(`Generating ${TOTAL} documents over ${CLASSES} cabinet types …`);
@@ -127,18 +122,8 @@ async function main(): Promise<void> {
       ),
     );
   } finally {
-    await closeDb();
-    await dropDatabase(env.db.name).catch(() => {});
-    const { emptyBucket } = await import("@/tests/helpers/storage");
-    await emptyBucket(env.s3.bucket).catch(() => {});
-    await services.stop();
+    await stack.close();
   }
 }
 
-main().then(
-  () => process.exit(0),
-  (e) => {
-    console.error(e);
-    process.exit(1);
-  },
-);
+runBench(main);
