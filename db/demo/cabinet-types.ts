@@ -13,8 +13,6 @@ export interface CabinetTypeSeed {
   retentionSource: string;
 }
 
-export const RETENTION_CAUTION =
-  "These retention periods are defaults. Confirm them against your jurisdiction's rules and your professional body before destroying any record. A legal hold always stops destruction.";
 
 export const DEMO_CABINET_TYPES: CabinetTypeSeed[] = [
   {

@@ -20,6 +20,10 @@ export interface DocumentSummary {
   cabinetType: string | null;
   ocrUsed: boolean;
   pageCount: number | null;
+  filedAt: string | null;
+  filedHow: string | null;
+  filedBy: string | null;
+  legalHold: boolean;
 }
 
 export interface DocumentDetail extends DocumentSummary {
@@ -46,6 +50,10 @@ const SUMMARY_COLUMNS = [
   "u.name as uploader",
   "m.number as matter",
   "c.name as cabinet",
+  "d.filed_at",
+  "d.filed_how",
+  "d.legal_hold",
+  "fu.name as filer",
 ];
 
 type Row = Record<string, unknown>;
@@ -64,6 +72,10 @@ function toSummary(r: Row): DocumentSummary {
     cabinetType: (r.cabinet as string | null) ?? null,
     ocrUsed: Boolean(r.ocr_used),
     pageCount: r.page_count === null ? null : Number(r.page_count),
+    filedAt: r.filed_at ? new Date(r.filed_at as string).toISOString() : null,
+    filedHow: (r.filed_how as string | null) ?? null,
+    filedBy: (r.filer as string | null) ?? null,
+    legalHold: Boolean(r.legal_hold),
   };
 }
 
@@ -71,6 +83,7 @@ function visibleDocuments(user: CurrentUser) {
   const db = getDb();
   const q = documentsWithMatters(db)
     .leftJoin("users as u", "u.id", "d.uploaded_by")
+    .leftJoin("users as fu", "fu.id", "d.filed_by")
     .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id");
   return whereDocumentVisible(q, user);
 }
@@ -103,6 +116,9 @@ export interface DocumentFilters {
   q?: string;
   uploadedByMe?: boolean;
   ids?: number[];
+  cabinetTypeId?: number;
+  matterId?: number;
+  filed?: boolean;
   page: number;
   pageSize: number;
 }
@@ -122,12 +138,15 @@ export async function listDocuments(user: CurrentUser, f: DocumentFilters): Prom
   if (f.status) base.where("d.status", f.status);
   if (f.uploadedByMe) base.where("d.uploaded_by", user.id);
   if (f.ids?.length) base.whereIn("d.id", f.ids);
+  if (f.cabinetTypeId) base.where("d.cabinet_type_id", f.cabinetTypeId);
+  if (f.matterId) base.where("d.matter_id", f.matterId);
+  if (f.filed !== undefined) base.where((w) => (f.filed ? w.whereNotNull("d.filed_at") : w.whereNull("d.filed_at")));
   const search = f.q ? toFulltextQuery(f.q) : "";
   if (search) base.whereRaw("MATCH(d.original_name, d.text) AGAINST (? IN BOOLEAN MODE)", [search]);
   const [{ total }] = await base.clone().clearSelect().count({ total: "d.id" });
   const rows = await base
     .select(SUMMARY_COLUMNS)
-    .orderBy("d.uploaded_at", "desc")
+    .orderByRaw(f.filed ? "d.filed_at DESC" : "d.uploaded_at DESC")
     .orderBy("d.id", "desc")
     .limit(f.pageSize)
     .offset((f.page - 1) * f.pageSize);
@@ -138,4 +157,42 @@ export async function findOriginal(user: CurrentUser, id: number): Promise<{ key
   const r = await visibleDocuments(user).where("d.id", id).first("d.storage_key", "d.original_name", "d.media_type", "d.size_bytes");
   if (!r) throw await missingOrWalled(id);
   return { key: r.storage_key, name: r.original_name, mediaType: r.media_type, size: Number(r.size_bytes) };
+}
+
+export interface CabinetCount {
+  matterId: number;
+  matter: string;
+  matterTitle: string;
+  clientName: string;
+  restricted: boolean;
+  cabinetTypeId: number;
+  cabinetType: string;
+  documents: number;
+  lastFiledAt: string;
+}
+
+/** The filed cabinets this user may see: one row per matter and cabinet type, with counts. */
+export async function listCabinets(user: CurrentUser): Promise<CabinetCount[]> {
+  const db = getDb();
+  const q = documentsWithMatters(db)
+    .join("cabinet_types as c", "c.id", "d.cabinet_type_id")
+    .join("clients as cl", "cl.id", "m.client_id")
+    .whereNotNull("d.filed_at")
+    .groupBy("m.id", "m.number", "m.title", "cl.name", "m.restricted", "c.id", "c.name")
+    .select("m.id as matter_id", "m.number", "m.title", "cl.name as client", "m.restricted", "c.id as type_id", "c.name as type_name")
+    .count({ n: "d.id" })
+    .max({ last: "d.filed_at" })
+    .orderBy([{ column: "m.number" }, { column: "c.name" }]);
+  const rows = await whereDocumentVisible(q, user);
+  return rows.map((r: Record<string, unknown>) => ({
+    matterId: Number(r.matter_id),
+    matter: String(r.number),
+    matterTitle: String(r.title),
+    clientName: String(r.client),
+    restricted: Boolean(r.restricted),
+    cabinetTypeId: Number(r.type_id),
+    cabinetType: String(r.type_name),
+    documents: Number(r.n),
+    lastFiledAt: new Date(r.last as string).toISOString(),
+  }));
 }

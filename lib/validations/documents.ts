@@ -9,6 +9,9 @@ export const documentListSchema = z.object({
     .regex(/^\d+(,\d+)*$/, "ids must be document numbers separated by commas.")
     .max(2000)
     .optional(),
+  cabinetType: z.coerce.number().int().positive().optional(),
+  matter: z.coerce.number().int().positive().optional(),
+  filed: z.enum(["0", "1", "true", "false"]).optional(),
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });

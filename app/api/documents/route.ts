@@ -17,6 +17,9 @@ export const GET = handle(async (request: Request) => {
     q: params.q,
     uploadedByMe: Boolean(params.mine),
     ids: params.ids?.split(",").map(Number),
+    cabinetTypeId: params.cabinetType,
+    matterId: params.matter,
+    filed: params.filed === undefined ? undefined : params.filed === "1" || params.filed === "true",
     page: params.page,
     pageSize: params.pageSize,
   });

@@ -1,0 +1,39 @@
+import Link from "next/link";
+import type { DocumentSummary } from "@/lib/data/documents";
+
+const HOW: Record<string, string> = { accepted: "Accepted", refiled: "Refiled", by_hand: "Filed by hand", auto: "Auto-filed" };
+
+export function FiledTable({ items }: { items: DocumentSummary[] }) {
+  return (
+    <table className="w-full border-collapse text-sm">
+      <thead className="sticky top-0 bg-paper text-left text-xs text-ink-soft">
+        <tr>
+          <th className="py-1 pr-2 font-medium">Document</th>
+          <th className="py-1 pr-2 font-medium">Matter</th>
+          <th className="py-1 pr-2 font-medium">Cabinet type</th>
+          <th className="py-1 pr-2 font-medium">Filed (UTC)</th>
+          <th className="py-1 pr-2 font-medium">How, by whom</th>
+        </tr>
+      </thead>
+      <tbody>
+        {items.map((d) => (
+          <tr key={d.id} className="border-t border-paper-edge align-top" data-testid="filed-row">
+            <td className="max-w-[22rem] truncate py-1 pr-2">
+              <Link href={`/documents/${d.id}`} className="text-verdigris hover:underline" title={d.name}>
+                {d.name}
+              </Link>
+              {d.legalHold && <span className="ml-1 rounded bg-brick-light px-1 text-xs text-brick">legal hold</span>}
+            </td>
+            <td className="py-1 pr-2 font-mono text-xs">{d.matter ?? "–"}</td>
+            <td className="py-1 pr-2">{d.cabinetType ?? "–"}</td>
+            <td className="py-1 pr-2 font-mono text-xs">{d.filedAt ? d.filedAt.slice(0, 16).replace("T", " ") : "–"}</td>
+            <td className="py-1 pr-2 text-xs">
+              {d.filedHow ? HOW[d.filedHow] ?? d.filedHow : "–"}
+              {d.filedBy ? `, ${d.filedBy}` : d.filedHow === "auto" ? ", Foldwright" : ""}
+            </td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
