@@ -5,18 +5,7 @@ import { applyTestEnv } from "./test-env";
 
 export default async function setup() {
   applyTestEnv();
-  const { env } = await import("@/lib/env");
-  const { startServices } = await import("@/lib/stack/services");
-  const { dropDatabase } = await import("@/db/local-server");
-  const { migrateDatabase, seedDatabase } = await import("@/db/migrate");
-  const services = await startServices([env.s3.bucket]);
-  await dropDatabase(env.db.name);
-  await migrateDatabase(env.db.name);
-  await seedDatabase(env.db.name);
-  return async () => {
-    const { emptyBucket } = await import("./helpers/storage");
-    await emptyBucket(env.s3.bucket).catch(() => {});
-    await dropDatabase(env.db.name).catch(() => {});
-    await services.stop();
-  };
+  const { openScratchStack } = await import("@/lib/stack/scratch-stack");
+  const stack = await openScratchStack();
+  return () => stack.close();
 }

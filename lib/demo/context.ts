@@ -3,15 +3,10 @@
 // e-mail on the client's domain, sometimes a tax ID ending, in the ways offices write them.
 import { pickPerson, mailbox } from "./people";
 import type { Random } from "./random";
+import type { MatterRecord } from "@/lib/filing/match-matter";
 
-export interface DemoMatterInput {
-  number: string;
-  title: string;
-  clientName: string;
-  aliases: string[];
-  emailDomains: string[];
-  taxIdLast4: string | null;
-}
+/** A matter as the matter matcher reads it, less what generation does not need. */
+export type DemoMatterInput = Omit<MatterRecord, "id" | "status">;
 
 export interface DocContext {
   rng: Random;

@@ -5,7 +5,7 @@
 // (foldwright_bench) on the local servers and removes them afterwards. Figures, not a test.
 import fs from "node:fs";
 import { loadAverage, percentile } from "@/lib/stack/stats";
-import { openBenchStack, runBench } from "@/lib/stack/bench-stack";
+import { openScratchStack, runBench } from "@/lib/stack/scratch-stack";
 import crypto from "node:crypto";
 import { createCanvas } from "@napi-rs/canvas";
 import PDFKit from "pdfkit";
@@ -86,7 +86,7 @@ function rssMb(pid: number): number {
 }
 
 async function main(): Promise<void> {
-  const stack = await openBenchStack();
+  const stack = await openScratchStack();
   const { env } = stack;
   const { buildApp, serveApp } = await import("@/lib/stack/app-server");
   await buildApp(".next");

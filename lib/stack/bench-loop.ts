@@ -6,7 +6,7 @@
 import crypto from "node:crypto";
 import fs from "node:fs";
 import { loadAverage, percentile } from "@/lib/stack/stats";
-import { openBenchStack, runBench } from "@/lib/stack/bench-stack";
+import { openScratchStack, runBench } from "@/lib/stack/scratch-stack";
 
 process.env.DATABASE_NAME ??= "foldwright_bench_loop";
 process.env.S3_BUCKET ??= "foldwright-bench";
@@ -24,7 +24,7 @@ function peakRssMb(): number {
 }
 
 async function main(): Promise<void> {
-  const stack = await openBenchStack();
+  const stack = await openScratchStack();
   const { env } = stack;
   const { getDb } = await import("@/db");
   const { generateSyntheticTexts } = await import("@/lib/demo/synthetic-texts");

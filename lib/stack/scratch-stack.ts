@@ -1,6 +1,7 @@
-// What the benchmarks share: their own database and bucket on the local servers, rebuilt from
-// the migrations and seeds, and removed afterwards. Set DATABASE_NAME and S3_BUCKET before use.
-export async function openBenchStack() {
+// A scratch database and bucket on the local servers (started here, or reused when running),
+// rebuilt from the migrations and seeds; close() removes them and stops only what it started.
+// The tests and the benchmarks use it; set DATABASE_NAME and S3_BUCKET before calling.
+export async function openScratchStack() {
   const { env } = await import("@/lib/env");
   const { startServices } = await import("@/lib/stack/services");
   const { dropDatabase } = await import("@/db/local-server");
