@@ -6,16 +6,25 @@ import { getOfficeSettings } from "@/lib/data/settings";
 import type { DocumentForSuggestion, NewSuggestion, RankedType } from "@/lib/data/suggestions";
 import { findKindByMediaType } from "@/lib/intake";
 import { predictDocument, type MlDocument } from "@/lib/ml";
-import { blendWithModel, rankByDescription } from "@/lib/filing/cold-start";
+import { blendWithModel, buildTypeProfiles, rankByProfiles, type TypeProfiles } from "@/lib/filing/cold-start";
 import { decideMatter, matchMatters } from "@/lib/filing/match-matter";
 import { getServingModel } from "@/lib/learning/model-store";
+
+// The cabinet types' description profiles change only when an admin edits the types: built once
+// per set of types, not once per document.
+let profiles: { key: string; value: TypeProfiles } | null = null;
+function profilesFor(types: { id: number; name: string; description: string; keywords: string[] }[]): TypeProfiles {
+  const key = JSON.stringify(types.map((t) => [t.id, t.name, t.description, t.keywords]));
+  if (profiles?.key !== key) profiles = { key, value: buildTypeProfiles(types) };
+  return profiles.value;
+}
 
 export async function computeSuggestion(doc: DocumentForSuggestion): Promise<NewSuggestion> {
   const [types, matters, settings, serving] = await Promise.all([listCabinetTypes(true), listAllMatters(), getOfficeSettings(), getServingModel()]);
   const text = doc.text ?? "";
   const mlDoc: MlDocument = { text, filename: doc.original_name, meta: { kind: findKindByMediaType(doc.media_type) ?? "other", pages: doc.page_count ?? undefined, ocr: Boolean(doc.ocr_used) } };
   const activeIds = new Set(types.map((t) => t.id));
-  const cold = rankByDescription({ text, filename: doc.original_name }, types);
+  const cold = rankByProfiles({ text, filename: doc.original_name }, profilesFor(types));
 
   let ranked: RankedType[];
   let method: NewSuggestion["method"] = "cold_start";
