@@ -8,6 +8,7 @@ import { env } from "../../lib/env";
 import { generateDemoDocuments } from "../../lib/demo/documents";
 import { readDocument, countSensitive } from "../../lib/intake";
 import { putObject } from "../../storage/s3";
+import { appendFilingEvent } from "../../lib/data/record";
 
 const FILED = 300;
 const WAITING = 12;
@@ -60,14 +61,14 @@ export async function seed(knex: Knex): Promise<void> {
         : {}),
     });
     if (filed) {
-      await knex("filing_events").insert({
-        document_id: id,
-        user_id: filer,
+      await appendFilingEvent(knex, {
+        documentId: id,
+        userId: filer,
         action: "filed_by_hand",
-        to_cabinet_type_id: types.get(d.cabinetTypeName),
-        to_matter_id: matterId,
+        toCabinetTypeId: types.get(d.cabinetTypeName),
+        toMatterId: matterId,
         reason: "Filed before Foldwright suggested anything (demo history).",
-        created_at: new Date(at.getTime() + 1_800_000),
+        createdAt: new Date(at.getTime() + 1_800_000),
       });
     }
     // Waiting documents get their suggestions once the first model exists (the start command

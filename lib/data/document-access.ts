@@ -1,20 +1,78 @@
 import "server-only";
-// The ethical wall for documents: a document in a restricted matter is visible only to that
-// matter's team and to admins — in lists, searches, counts, downloads and duplicate answers.
+// The ethical wall — the one rule every read of documents and matters goes through.
+//
+// A document is *linked* to every matter it was ever filed into, suggested into, listed as a
+// matter candidate of, or moved from or to (document_matter_links, written only by
+// lib/data/record.ts with the event that made the link). A user outside a restricted matter's
+// team (admins are always inside) gets nothing of a document linked to it: not in lists, search,
+// counts, queues, pages, text, originals, previews, timelines, the record or its CSV. The rule
+// reads `matters.restricted` and `matter_members` at query time, so restricting a matter or
+// removing someone from its team takes effect on that person's next request.
 import type { Knex } from "knex";
+import { getDb } from "@/db";
 import type { CurrentUser } from "@/lib/data/users";
 
-/** Adds the visibility condition; the query must join `matters as m` on documents.matter_id. */
-export function whereDocumentVisible(q: Knex.QueryBuilder, user: CurrentUser): Knex.QueryBuilder {
+type Query = Knex.QueryBuilder;
+
+/** SQL (with bindings) true when a restricted matter with id `matterExpr` is closed to the user. */
+function walledMatterSql(matterExpr: string, user: CurrentUser): [string, Knex.RawBinding[]] {
+  return [
+    `EXISTS (SELECT 1 FROM matters wm WHERE wm.id = ${matterExpr} AND wm.restricted = 1
+       AND NOT EXISTS (SELECT 1 FROM matter_members wmm WHERE wmm.matter_id = wm.id AND wmm.user_id = ?))`,
+    [user.id],
+  ];
+}
+
+/**
+ * True for a document behind a wall the user is outside of: through any link on its record, or
+ * through the matter it is filed in now (so a row written without its link is still walled).
+ */
+function walledDocumentSql(alias: string, user: CurrentUser): [string, Knex.RawBinding[]] {
+  const [viaLink, b1] = walledMatterSql("wl.matter_id", user);
+  const [viaFiled, b2] = walledMatterSql("??.matter_id", user);
+  return [
+    `(EXISTS (SELECT 1 FROM document_matter_links wl WHERE wl.document_id = ??.id AND ${viaLink}) OR (??.matter_id IS NOT NULL AND ${viaFiled}))`,
+    [alias, ...b1, alias, alias, ...b2],
+  ];
+}
+
+/** Keeps only documents (aliased `alias`) the user may know exist. */
+export function whereDocumentVisible(q: Query, user: CurrentUser, alias = "d"): Query {
+  if (user.role === "admin") return q;
+  const [sql, bindings] = walledDocumentSql(alias, user);
+  return q.whereRaw(`NOT (${sql})`, bindings);
+}
+
+/** The opposite, for the few places that must say "restricted" without showing anything else. */
+export function whereDocumentWalled(q: Query, user: CurrentUser, alias = "d"): Query {
+  if (user.role === "admin") return q.whereRaw("1 = 0");
+  const [sql, bindings] = walledDocumentSql(alias, user);
+  return q.whereRaw(sql, bindings);
+}
+
+/** Keeps only matters (aliased `alias`) the user may see: open ones, or restricted ones they are on. */
+export function whereMatterVisible(q: Query, user: CurrentUser, alias = "m"): Query {
   if (user.role === "admin") return q;
   return q.where((w) =>
     w
-      .whereNull("m.id")
-      .orWhere("m.restricted", false)
-      .orWhereExists((e) => e.select(e.client.raw("1")).from("matter_members as mm").whereRaw("mm.matter_id = m.id").where("mm.user_id", user.id)),
+      .where(`${alias}.restricted`, false)
+      .orWhereExists((e) => e.select(e.client.raw("1")).from("matter_members as vmm").whereRaw("vmm.matter_id = ??.id", [alias]).where("vmm.user_id", user.id)),
   );
 }
 
-export function documentsWithMatters(db: Knex): Knex.QueryBuilder {
+/** True when the user may know the document exists (and it does). */
+export async function canSeeDocument(user: CurrentUser, documentId: number, db: Knex | Knex.Transaction = getDb()): Promise<boolean> {
+  const row = await whereDocumentVisible(db("documents as d").where("d.id", documentId), user).first("d.id");
+  return Boolean(row);
+}
+
+/** Of these document ids, the ones the user may know exist. */
+export async function visibleDocumentIds(user: CurrentUser, ids: number[]): Promise<Set<number>> {
+  if (ids.length === 0) return new Set();
+  const rows: number[] = await whereDocumentVisible(getDb()("documents as d").whereIn("d.id", ids), user).pluck("d.id");
+  return new Set(rows.map(Number));
+}
+
+export function documentsWithMatters(db: Knex): Query {
   return db("documents as d").leftJoin("matters as m", "m.id", "d.matter_id");
 }

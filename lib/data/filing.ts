@@ -5,6 +5,7 @@ import { getDb } from "@/db";
 import { AppError, badInput } from "@/lib/errors";
 import { canSeeMatter } from "@/lib/data/catalog";
 import { documentsWithMatters, whereDocumentVisible } from "@/lib/data/document-access";
+import { appendFilingEvent, type FilingEventAction } from "@/lib/data/record";
 import type { CurrentUser } from "@/lib/data/users";
 
 export type FilingAction = "accept" | "refile" | "file" | "confirm" | "move";
@@ -71,7 +72,7 @@ export async function fileDocument(user: CurrentUser, documentId: number, input:
   const ranked = suggestion ? parse<{ cabinetTypeId: number; confidence: number }[]>(suggestion.ranked) : [];
   const confidenceOf = (typeId: number) => ranked.find((r) => r.cabinetTypeId === typeId)?.confidence ?? null;
 
-  let action: string;
+  let action: FilingEventAction;
   let typeId: number;
   let matterId: number;
   let filedHow: string;
@@ -83,14 +84,13 @@ export async function fileDocument(user: CurrentUser, documentId: number, input:
     const n = await db.transaction(async (trx) => {
       const updated = await trx("documents").where({ id: documentId }).whereNull("confirmed_at").update({ confirmed_by: user.id, confirmed_at: trx.fn.now() });
       if (!updated) return 0;
-      const [eventId] = await trx("filing_events").insert({
-        document_id: documentId, user_id: user.id, action: "confirmed",
-        from_cabinet_type_id: doc.cabinet_type_id, to_cabinet_type_id: doc.cabinet_type_id,
-        from_matter_id: doc.matter_id, to_matter_id: doc.matter_id,
-        model_version_id: suggestion?.model_version_id ?? null, confidence: confidenceOf(doc.cabinet_type_id),
+      return appendFilingEvent(trx, {
+        documentId, userId: user.id, action: "confirmed",
+        fromCabinetTypeId: doc.cabinet_type_id, toCabinetTypeId: doc.cabinet_type_id,
+        fromMatterId: doc.matter_id, toMatterId: doc.matter_id,
+        modelVersionId: suggestion?.model_version_id ?? null, confidence: confidenceOf(doc.cabinet_type_id),
         reason: input.reason ?? "Spot-check: the auto-filing is right.",
       });
-      return eventId as number;
     });
     if (!n) throw new AppError(409, "already_confirmed", "Someone confirmed this document a moment ago.");
     return { documentId, cabinetTypeId: doc.cabinet_type_id, matterId: doc.matter_id, filedHow: "auto", eventId: n, action: "confirmed" };
@@ -131,19 +131,18 @@ export async function fileDocument(user: CurrentUser, documentId: number, input:
       ...(action === "moved" && doc.filed_how === "auto" ? { confirmed_by: user.id, confirmed_at: trx.fn.now() } : {}),
     });
     if (!n) return 0;
-    const [id] = await trx("filing_events").insert({
-      document_id: documentId,
-      user_id: user.id,
+    return appendFilingEvent(trx, {
+      documentId,
+      userId: user.id,
       action,
-      from_cabinet_type_id: fromType,
-      to_cabinet_type_id: typeId,
-      from_matter_id: fromMatter,
-      to_matter_id: matterId,
-      model_version_id: suggestion?.model_version_id ?? null,
+      fromCabinetTypeId: fromType,
+      toCabinetTypeId: typeId,
+      fromMatterId: fromMatter,
+      toMatterId: matterId,
+      modelVersionId: suggestion?.model_version_id ?? null,
       confidence: confidenceOf(typeId),
-      reason: input.reason?.slice(0, 600) ?? null,
+      reason: input.reason ?? null,
     });
-    return id as number;
   });
   if (!eventId) throw new AppError(409, "already_filed", "Someone filed this document a moment ago. Open it to see where.");
   return { documentId, cabinetTypeId: typeId, matterId, filedHow, eventId, action };

@@ -49,15 +49,6 @@ function baseQuery(db: Knex, user: CurrentUser, f: QueueFilters) {
     .leftJoin("cabinet_types as ct", "ct.id", "s.top_cabinet_type_id")
     .leftJoin("matters as sm", "sm.id", "s.top_matter_id");
   whereDocumentVisible(q, user);
-  if (user.role !== "admin") {
-    // A suggestion pointing into a restricted matter keeps the document out of outsiders' queues.
-    q.where((w) =>
-      w
-        .whereNull("sm.id")
-        .orWhere("sm.restricted", false)
-        .orWhereExists((e) => e.select(db.raw("1")).from("matter_members as mm2").whereRaw("mm2.matter_id = sm.id").where("mm2.user_id", user.id)),
-    );
-  }
   if (f.list === "review") {
     q.whereNull("d.filed_at").where((w) => w.where("d.status", "unreadable").orWhere((r) => r.where("d.status", "ready").whereNotNull("s.id")));
   } else {

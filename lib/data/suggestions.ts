@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { completeJob, enqueueJob } from "@/lib/data/jobs";
+import { appendFilingEvent, linkDocumentToMatters } from "@/lib/data/record";
 
 export interface RankedType {
   cabinetTypeId: number;
@@ -63,13 +64,15 @@ async function insertSuggestion(trx: Knex.Transaction, s: NewSuggestion): Promis
     top_matter_id: s.topMatterId,
     matter_ambiguous: s.matterAmbiguous,
   });
-  await trx("filing_events").insert({
-    document_id: s.documentId,
-    user_id: null,
+  // Every matter the suggestion names is linked first: the wall holds before anyone can look.
+  await linkDocumentToMatters(trx, s.documentId, s.matterCandidates.map((c) => ({ matterId: c.matterId, how: "candidate" as const })));
+  await appendFilingEvent(trx, {
+    documentId: s.documentId,
+    userId: null,
     action: "suggested",
-    to_cabinet_type_id: top?.cabinetTypeId ?? null,
-    to_matter_id: s.topMatterId,
-    model_version_id: s.modelVersionId,
+    toCabinetTypeId: top?.cabinetTypeId ?? null,
+    toMatterId: s.topMatterId,
+    modelVersionId: s.modelVersionId,
     confidence: top?.confidence ?? null,
     reason: s.method === "model" ? "Suggested by the model." : s.method === "blended" ? "Suggested by the model; some cabinet types ranked by their descriptions (too few examples yet)." : "Ranked by the cabinet types' descriptions and keywords: no model yet.",
   });
@@ -82,13 +85,13 @@ async function insertSuggestion(trx: Knex.Transaction, s: NewSuggestion): Promis
       filed_by: null,
     });
     if (n === 1) {
-      await trx("filing_events").insert({
-        document_id: s.documentId,
-        user_id: null,
+      await appendFilingEvent(trx, {
+        documentId: s.documentId,
+        userId: null,
         action: "auto_filed",
-        to_cabinet_type_id: top.cabinetTypeId,
-        to_matter_id: s.topMatterId,
-        model_version_id: s.modelVersionId,
+        toCabinetTypeId: top.cabinetTypeId,
+        toMatterId: s.topMatterId,
+        modelVersionId: s.modelVersionId,
         confidence: top.confidence,
         reason: "Confidence passed the office's auto-file bar; waiting in the spot-check list.",
       });

@@ -1,0 +1,73 @@
+// The one writer of the filing record (filing_events) and of the ethical wall's links
+// (document_matter_links). Every decision — suggestion, accept, refile, file by hand, auto-file,
+// confirm, move, undo, import, disposal — appends its event here, inside the caller's
+// transaction, and every matter the event names is linked to the document in the same
+// transaction, so the wall can never lag behind the record.
+//
+// No "server-only" import: the demo seed (run by tsx outside React's server build) writes its
+// history through this module too. It takes the caller's Knex or transaction and reads no session.
+import type { Knex } from "knex";
+
+export const FILING_ACTIONS = [
+  "suggested",
+  "accepted",
+  "refiled",
+  "filed_by_hand",
+  "auto_filed",
+  "confirmed",
+  "moved",
+  "undone",
+  "imported",
+  "disposed",
+] as const;
+export type FilingEventAction = (typeof FILING_ACTIONS)[number];
+
+/** How a document came to be linked to a matter (the first link of each pair is kept). */
+export type LinkHow = "filed" | "suggested" | "candidate" | "moved" | "imported";
+
+export interface NewFilingEvent {
+  documentId: number;
+  userId: number | null; // null: Foldwright itself
+  action: FilingEventAction;
+  fromCabinetTypeId?: number | null;
+  toCabinetTypeId?: number | null;
+  fromMatterId?: number | null;
+  toMatterId?: number | null;
+  modelVersionId?: number | null;
+  confidence?: number | null;
+  reason?: string | null;
+  /** Only for history written after the fact (the demo seed); otherwise the database clock. */
+  createdAt?: Date;
+}
+
+const REASON_MAX = 600;
+
+const LINK_OF: Partial<Record<FilingEventAction, LinkHow>> = { suggested: "suggested", moved: "moved", undone: "moved", imported: "imported" };
+
+export async function linkDocumentToMatters(db: Knex | Knex.Transaction, documentId: number, links: { matterId: number; how: LinkHow }[]): Promise<void> {
+  const rows = links.filter((l) => Number.isInteger(l.matterId) && l.matterId > 0).map((l) => ({ document_id: documentId, matter_id: l.matterId, how: l.how }));
+  if (rows.length) await db("document_matter_links").insert(rows).onConflict(["document_id", "matter_id"]).ignore();
+}
+
+export async function appendFilingEvent(db: Knex | Knex.Transaction, e: NewFilingEvent): Promise<number> {
+  if (!FILING_ACTIONS.includes(e.action)) throw new Error(`Unknown filing action "${e.action}".`);
+  const how = LINK_OF[e.action] ?? "filed";
+  await linkDocumentToMatters(db, e.documentId, [
+    ...(e.fromMatterId ? [{ matterId: e.fromMatterId, how }] : []),
+    ...(e.toMatterId ? [{ matterId: e.toMatterId, how }] : []),
+  ]);
+  const [id] = await db("filing_events").insert({
+    document_id: e.documentId,
+    user_id: e.userId,
+    action: e.action,
+    from_cabinet_type_id: e.fromCabinetTypeId ?? null,
+    to_cabinet_type_id: e.toCabinetTypeId ?? null,
+    from_matter_id: e.fromMatterId ?? null,
+    to_matter_id: e.toMatterId ?? null,
+    model_version_id: e.modelVersionId ?? null,
+    confidence: e.confidence ?? null,
+    reason: e.reason ? e.reason.slice(0, REASON_MAX) : null,
+    ...(e.createdAt ? { created_at: e.createdAt } : {}),
+  });
+  return Number(id);
+}
