@@ -25,7 +25,15 @@ export function knexConfig(role: Role = "app", database = env.db.name): Knex.Con
       timezone: "Z",
       supportBigNumbers: true,
     },
-    pool: { min: 0, max: role === "app" ? env.db.poolMax : 2 },
+    pool: {
+      min: 0,
+      max: role === "app" ? env.db.poolMax : 2,
+      // Every connection works in UTC, whatever the server's own zone: NOW() defaults and the
+      // dates mysql2 sends and reads (timezone "Z" above) then agree.
+      afterCreate: (conn: { query: (sql: string, cb: (err: Error | null) => void) => void }, done: (err: Error | null, conn: unknown) => void) => {
+        conn.query("SET time_zone = '+00:00'", (err) => done(err, conn));
+      },
+    },
     migrations: {
       migrationSource: migrationSource(MIGRATIONS_DIR),
       tableName: "knex_migrations",

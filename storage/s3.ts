@@ -48,12 +48,29 @@ export async function putObject(
   );
 }
 
+/** The object is not in the bucket (a lost or disposed original), as opposed to a store that is down. */
+export function isMissingObject(e: unknown): boolean {
+  return e instanceof Error && (e.name === "NotFound" || e.name === "NoSuchKey");
+}
+
+/**
+ * The store is not answering: a network failure, a time-out or a 5xx. Anything else (a missing
+ * object, access denied, a bad request) is not "try again later" and must not be answered as 503.
+ */
+export function isStorageUnavailable(e: unknown): boolean {
+  if (typeof e !== "object" || e === null) return false;
+  const err = e as { name?: string; code?: string; $metadata?: { httpStatusCode?: number } };
+  const status = err.$metadata?.httpStatusCode;
+  if (status !== undefined) return status >= 500;
+  return true; // no HTTP answer at all: connection refused, reset, DNS, time-out
+}
+
 export async function headObject(key: string, bucket = env.s3.bucket): Promise<StoredObjectInfo | null> {
   try {
     const out = await getS3().send(new HeadObjectCommand({ Bucket: bucket, Key: key }));
     return { size: out.ContentLength ?? 0, contentType: out.ContentType, metadata: out.Metadata ?? {} };
   } catch (e) {
-    if (e instanceof Error && (e.name === "NotFound" || e.name === "NoSuchKey")) return null;
+    if (isMissingObject(e)) return null;
     throw e;
   }
 }

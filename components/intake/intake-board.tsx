@@ -20,6 +20,7 @@ interface DocState {
   id: number;
   status: "reading" | "ready" | "unreadable";
   reason: string | null;
+  restricted?: true;
 }
 
 const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? r.json() : Promise.reject(new Error(String(r.status)))));
@@ -65,7 +66,7 @@ export function IntakeBoard({ maxBytes }: { maxBytes: number }) {
         rs.map((r) => {
           const doc = r.state === "reading" ? data.items.find((d) => d.id === r.id) : undefined;
           if (!doc || doc.status === "reading") return r;
-          return { ...r, state: doc.status, message: doc.reason ?? undefined };
+          return { ...r, state: doc.restricted ? "restricted" : doc.status, message: doc.reason ?? undefined };
         }),
       ),
   });

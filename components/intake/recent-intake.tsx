@@ -12,6 +12,7 @@ interface Item {
   uploadedBy: string;
   ocrUsed: boolean;
   pageCount: number | null;
+  restricted?: true;
 }
 
 const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? r.json() : Promise.reject(new Error(String(r.status)))));
@@ -62,12 +63,12 @@ export function RecentIntake() {
               <tr key={i.id} className="border-t border-paper-edge align-top">
                 <td className="py-1 pr-2 font-mono text-xs">{i.id}</td>
                 <td className="py-1 pr-2">
-                  <a href={`/api/documents/${i.id}/original`} className="text-verdigris hover:underline">{i.name}</a>
+                  {i.restricted ? <span>{i.name}</span> : <a href={`/api/documents/${i.id}/original`} className="text-verdigris hover:underline">{i.name}</a>}
                   {i.reason && <p className="text-xs text-ink-soft">{i.reason}</p>}
                 </td>
                 <td className="py-1 pr-2 font-mono text-xs">{i.uploadedAt.slice(0, 16).replace("T", " ")}</td>
-                <td className="py-1 pr-2">{i.pageCount ?? "–"}{i.ocrUsed ? " (OCR)" : ""}</td>
-                <td className="py-1 pr-2"><StateBadge state={i.status} /></td>
+                <td className="py-1 pr-2">{i.restricted ? "–" : `${i.pageCount ?? "–"}${i.ocrUsed ? " (OCR)" : ""}`}</td>
+                <td className="py-1 pr-2"><StateBadge state={i.restricted ? "restricted" : i.status} /></td>
               </tr>
             ))}
           </tbody>

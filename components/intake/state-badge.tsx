@@ -1,6 +1,6 @@
 import { cn } from "@/lib/utils";
 
-export type IntakeState = "queued" | "uploading" | "reading" | "ready" | "unreadable" | "duplicate" | "rejected";
+export type IntakeState = "queued" | "uploading" | "reading" | "ready" | "unreadable" | "duplicate" | "rejected" | "restricted";
 
 const LABELS: Record<IntakeState, string> = {
   queued: "Waiting",
@@ -10,6 +10,7 @@ const LABELS: Record<IntakeState, string> = {
   unreadable: "Unreadable",
   duplicate: "Already held",
   rejected: "Not accepted",
+  restricted: "Restricted",
 };
 
 /** The state in words, with a colour as a second cue only. */
@@ -21,7 +22,7 @@ export function StateBadge({ state }: { state: IntakeState }) {
         "inline-block rounded px-2 py-0.5 text-xs font-medium",
         state === "ready" && "bg-verdigris-light text-verdigris-dark",
         (state === "reading" || state === "uploading" || state === "queued") && "bg-paper-deep text-ink-soft",
-        state === "duplicate" && "bg-amber-light text-amber",
+        (state === "duplicate" || state === "restricted") && "bg-amber-light text-amber",
         (state === "unreadable" || state === "rejected") && "bg-brick-light text-brick",
       )}
     >

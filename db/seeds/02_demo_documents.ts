@@ -9,11 +9,11 @@ import { generateDemoDocuments } from "../../lib/demo/documents";
 import { readDocument, countSensitive } from "../../lib/intake";
 import { putObject } from "../../storage/s3";
 import { appendFilingEvent } from "../../lib/data/record";
+import { demoFilingTime, demoUploadTime } from "../../lib/demo/timeline";
 
 const FILED = 300;
 const WAITING = 12;
 const MEDIA = { pdf: "application/pdf", docx: "application/vnd.openxmlformats-officedocument.wordprocessingml.document" } as const;
-const DAY = 86_400_000;
 
 export async function seed(knex: Knex): Promise<void> {
   if (!env.seedDemoDocuments) return;
@@ -38,7 +38,7 @@ export async function seed(knex: Knex): Promise<void> {
     const matterId = matters.get(d.matterNumber)!;
     // The restricted matter's papers are filed by its team (the partner), others mostly by the clerk.
     const filer = d.matterNumber === "AQ-2026-0131" || i % 5 === 0 ? partner : clerk;
-    const at = new Date(now - (FILED - i) * (DAY / 6) - 3_600_000);
+    const at = demoUploadTime(i, docs.length, now);
     const [id] = await knex("documents").insert({
       sha256,
       original_name: d.fileName,
@@ -57,7 +57,7 @@ export async function seed(knex: Knex): Promise<void> {
       uploaded_at: at,
       read_at: at,
       ...(filed
-        ? { cabinet_type_id: types.get(d.cabinetTypeName), matter_id: matterId, filed_by: filer, filed_at: new Date(at.getTime() + 1_800_000), filed_how: "by_hand" }
+        ? { cabinet_type_id: types.get(d.cabinetTypeName), matter_id: matterId, filed_by: filer, filed_at: demoFilingTime(at, now), filed_how: "by_hand" }
         : {}),
     });
     if (filed) {
@@ -68,7 +68,7 @@ export async function seed(knex: Knex): Promise<void> {
         toCabinetTypeId: types.get(d.cabinetTypeName),
         toMatterId: matterId,
         reason: "Filed before Foldwright suggested anything (demo history).",
-        createdAt: new Date(at.getTime() + 1_800_000),
+        createdAt: demoFilingTime(at, now),
       });
     }
     // Waiting documents get their suggestions once the first model exists (the start command

@@ -1,6 +1,9 @@
 import "server-only";
 // Cabinet types and matters as the screens and the suggester need them.
 import { getDb } from "@/db";
+import { can } from "@/lib/auth/permissions";
+import { notAllowed } from "@/lib/errors";
+import { whereMatterVisible } from "@/lib/data/document-access";
 import type { CurrentUser } from "@/lib/data/users";
 import type { MatterRecord } from "@/lib/filing/match-matter";
 
@@ -19,17 +22,33 @@ export interface MatterOption extends MatterRecord {
 
 const json = <T>(v: unknown, fallback: T): T => (v === null || v === undefined ? fallback : typeof v === "string" ? (JSON.parse(v) as T) : (v as T));
 
-export async function listCabinetTypes(activeOnly = false): Promise<CabinetTypeOption[]> {
+/** Cabinet types hold no matter or document, so every signed-in role may read them. */
+export async function listCabinetTypes(user: CurrentUser, activeOnly = false): Promise<CabinetTypeOption[]> {
+  if (!can(user.role, "documents.read")) throw notAllowed("see cabinet types");
   const q = getDb()("cabinet_types").select("id", "name", "description", "keywords", "active").orderBy("name");
   if (activeOnly) q.where({ active: true });
   return (await q).map((r) => ({ ...r, keywords: json<string[]>(r.keywords, []), active: Boolean(r.active) }));
 }
 
-/** Every matter, for the suggester (which never shows them to anyone by itself). */
-export async function listAllMatters(): Promise<MatterOption[]> {
-  const rows = await getDb()("matters as m")
+interface MatterRow {
+  id: number;
+  number: string;
+  title: string;
+  status: MatterOption["status"];
+  restricted: number;
+  clientName: string;
+  aliases: unknown;
+  email_domains: unknown;
+  tax_id_last4: string | null;
+}
+
+/** The matters this user may see (restricted ones only with their team, or as admin). */
+export async function listVisibleMatters(user: CurrentUser): Promise<MatterOption[]> {
+  const q = getDb()("matters as m")
     .join("clients as c", "c.id", "m.client_id")
-    .select("m.id", "m.number", "m.title", "m.status", "m.restricted", "c.name as clientName", "c.aliases", "c.email_domains", "c.tax_id_last4");
+    .select("m.id", "m.number", "m.title", "m.status", "m.restricted", "c.name as clientName", "c.aliases", "c.email_domains", "c.tax_id_last4")
+    .orderBy("m.number");
+  const rows: MatterRow[] = await whereMatterVisible(q, user);
   return rows.map((r) => ({
     id: r.id,
     number: r.number,
@@ -43,14 +62,6 @@ export async function listAllMatters(): Promise<MatterOption[]> {
   }));
 }
 
-/** The matters this user may see (restricted ones only with their team, or as admin). */
-export async function listVisibleMatters(user: CurrentUser): Promise<MatterOption[]> {
-  const all = await listAllMatters();
-  if (user.role === "admin") return all;
-  const mine = new Set((await getDb()("matter_members").where({ user_id: user.id }).pluck("matter_id")) as number[]);
-  return all.filter((m) => !m.restricted || mine.has(m.id));
-}
-
 export async function canSeeMatter(user: CurrentUser, matterId: number): Promise<boolean> {
-  return (await listVisibleMatters(user)).some((m) => m.id === matterId);
+  return Boolean(await whereMatterVisible(getDb()("matters as m").where("m.id", matterId), user).first("m.id"));
 }

@@ -27,8 +27,9 @@ function walledMatterSql(matterExpr: string, user: CurrentUser): [string, Knex.R
  * True for a document behind a wall the user is outside of: through any link on its record, or
  * through the matter it is filed in now (so a row written without its link is still walled).
  */
-function walledDocumentSql(alias: string, user: CurrentUser): [string, Knex.RawBinding[]] {
+export function walledDocumentSql(alias: string, user: CurrentUser): [string, Knex.RawBinding[]] {
   const [viaLink, b1] = walledMatterSql("wl.matter_id", user);
+  if (user.role === "admin") return ["(1 = 0)", []];
   const [viaFiled, b2] = walledMatterSql("??.matter_id", user);
   return [
     `(EXISTS (SELECT 1 FROM document_matter_links wl WHERE wl.document_id = ??.id AND ${viaLink}) OR (??.matter_id IS NOT NULL AND ${viaFiled}))`,

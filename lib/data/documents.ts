@@ -3,8 +3,8 @@ import "server-only";
 // the original's location for a download — all through the ethical wall.
 import { getDb } from "@/db";
 import { maskSensitive } from "@/lib/intake";
-import { AppError, notFound } from "@/lib/errors";
-import { documentsWithMatters, whereDocumentVisible } from "@/lib/data/document-access";
+import { notFound } from "@/lib/errors";
+import { documentsWithMatters, walledDocumentSql, whereDocumentVisible } from "@/lib/data/document-access";
 import type { CurrentUser } from "@/lib/data/users";
 
 export interface DocumentSummary {
@@ -24,7 +24,15 @@ export interface DocumentSummary {
   filedHow: string | null;
   filedBy: string | null;
   legalHold: boolean;
+  /**
+   * Only on the uploader's own Intake list: the document is behind a wall the uploader is outside
+   * of. Then the name and this flag are all there is; every other field is blanked.
+   */
+  restricted?: true;
 }
+
+/** What the uploader of a walled document sees of it at Intake, and nothing else. */
+export const RESTRICTED_NOTE = "Restricted — ask the matter's team.";
 
 export interface DocumentDetail extends DocumentSummary {
   charCount: number | null;
@@ -88,18 +96,25 @@ function visibleDocuments(user: CurrentUser) {
   return whereDocumentVisible(q, user);
 }
 
-/** 404 when there is no such document; 403 when it sits behind an ethical wall the user is not on. */
-async function missingOrWalled(id: number): Promise<AppError> {
-  const exists = await getDb()("documents").where({ id }).first("id");
-  if (!exists) return notFound("That document");
-  return new AppError(403, "restricted_matter", "This document is in a restricted matter you are not on. Ask an admin or the matter's partner if you need it.");
+/**
+ * A document behind a wall is answered exactly like one that does not exist (404), so the
+ * answer never tells an outsider that a restricted matter holds something.
+ */
+const missing = () => notFound("That document");
+
+function toRestrictedStub(r: Row): DocumentSummary {
+  return {
+    id: Number(r.id), name: String(r.original_name), mediaType: "", sizeBytes: 0, status: "ready", reason: RESTRICTED_NOTE,
+    uploadedAt: new Date(r.uploaded_at as string).toISOString(), uploadedBy: "", matter: null, cabinetType: null, ocrUsed: false,
+    pageCount: null, filedAt: null, filedHow: null, filedBy: null, legalHold: false, restricted: true,
+  };
 }
 
 export async function getDocument(user: CurrentUser, id: number): Promise<DocumentDetail> {
   const r = await visibleDocuments(user)
     .where("d.id", id)
     .first([...SUMMARY_COLUMNS, "d.char_count", "d.read_ms", "d.ssn_count", "d.routing_count", "d.card_count", "d.text"]);
-  if (!r) throw await missingOrWalled(id);
+  if (!r) throw missing();
   const text = r.text as string | null;
   return {
     ...toSummary(r),
@@ -133,7 +148,16 @@ function toFulltextQuery(q: string): string {
     .join(" ");
 }
 
+/**
+ * The uploader's own list at Intake (mine or ids, with nothing else that reads the document)
+ * keeps their walled uploads as name-only stubs; every other list simply leaves them out.
+ */
+function keepsOwnStubs(f: DocumentFilters): boolean {
+  return Boolean(f.uploadedByMe || f.ids?.length) && !f.q && !f.status && !f.cabinetTypeId && !f.matterId && f.filed === undefined;
+}
+
 export async function listDocuments(user: CurrentUser, f: DocumentFilters): Promise<{ items: DocumentSummary[]; total: number }> {
+  if (keepsOwnStubs(f)) return listOwnUploads(user, f);
   const base = visibleDocuments(user);
   if (f.status) base.where("d.status", f.status);
   if (f.uploadedByMe) base.where("d.uploaded_by", user.id);
@@ -153,9 +177,28 @@ export async function listDocuments(user: CurrentUser, f: DocumentFilters): Prom
   return { items: rows.map(toSummary), total: Number(total) };
 }
 
+async function listOwnUploads(user: CurrentUser, f: DocumentFilters): Promise<{ items: DocumentSummary[]; total: number }> {
+  const db = getDb();
+  const [walled, bindings] = walledDocumentSql("d", user);
+  const base = documentsWithMatters(db)
+    .leftJoin("users as u", "u.id", "d.uploaded_by")
+    .leftJoin("users as fu", "fu.id", "d.filed_by")
+    .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id")
+    .where("d.uploaded_by", user.id);
+  if (f.ids?.length) base.whereIn("d.id", f.ids);
+  const [{ total }] = await base.clone().count({ total: "d.id" });
+  const rows = await base
+    .select([...SUMMARY_COLUMNS, db.raw(`${walled} AS walled`, bindings)])
+    .orderBy("d.uploaded_at", "desc")
+    .orderBy("d.id", "desc")
+    .limit(f.pageSize)
+    .offset((f.page - 1) * f.pageSize);
+  return { items: rows.map((r: Row) => (Number(r.walled) ? toRestrictedStub(r) : toSummary(r))), total: Number(total) };
+}
+
 export async function findOriginal(user: CurrentUser, id: number): Promise<{ key: string; name: string; mediaType: string; size: number }> {
   const r = await visibleDocuments(user).where("d.id", id).first("d.storage_key", "d.original_name", "d.media_type", "d.size_bytes");
-  if (!r) throw await missingOrWalled(id);
+  if (!r) throw missing();
   return { key: r.storage_key, name: r.original_name, mediaType: r.media_type, size: Number(r.size_bytes) };
 }
 

@@ -2,8 +2,9 @@ import "server-only";
 // The filing record: a document's timeline, the latest suggestion in words, and the audit list.
 import type { Knex } from "knex";
 import { getDb } from "@/db";
-import { listVisibleMatters } from "@/lib/data/catalog";
-import { whereDocumentVisible } from "@/lib/data/document-access";
+import { listCabinetTypes, listVisibleMatters } from "@/lib/data/catalog";
+import { canSeeDocument, whereDocumentVisible } from "@/lib/data/document-access";
+import { notFound } from "@/lib/errors";
 import type { CurrentUser } from "@/lib/data/users";
 
 export interface FilingEvent {
@@ -54,7 +55,13 @@ const toEvent = (r: Record<string, unknown>): FilingEvent => ({
   reason: (r.reason as string | null) ?? null,
 });
 
-export async function listDocumentTimeline(documentId: number): Promise<FilingEvent[]> {
+/**
+ * One document's record, for someone who may see the document (else 404, as if it did not exist).
+ * A visible document is linked to no matter walled off from this user, so no event of its
+ * record can name one.
+ */
+export async function listDocumentTimeline(user: CurrentUser, documentId: number): Promise<FilingEvent[]> {
+  if (!(await canSeeDocument(user, documentId))) throw notFound("That document");
   return (await events(getDb()).where("e.document_id", documentId).orderBy("e.id")).map(toEvent);
 }
 
@@ -95,10 +102,11 @@ export interface SuggestionDetail {
 const parse = <T>(v: unknown): T => (typeof v === "string" ? JSON.parse(v) : v) as T;
 
 export async function getLatestSuggestion(user: CurrentUser, documentId: number): Promise<SuggestionDetail | null> {
+  if (!(await canSeeDocument(user, documentId))) throw notFound("That document");
   const db = getDb();
   const s = await db("suggestions").where({ document_id: documentId }).orderBy("id", "desc").first();
   if (!s) return null;
-  const names = new Map((await db("cabinet_types").select("id", "name")).map((t) => [t.id, t.name]));
+  const names = new Map((await listCabinetTypes(user)).map((t) => [t.id, t.name]));
   const visible = new Map((await listVisibleMatters(user)).map((m) => [m.id, m]));
   const ranked = parse<{ cabinetTypeId: number; confidence: number; probability: number | null; source?: string }[]>(s.ranked);
   const candidates = parse<{ matterId: number; score: number; reasons: string[] }[]>(s.matter_candidates).filter((c) => visible.has(c.matterId));

@@ -9,7 +9,9 @@ import { cleanFileName, sha256Hex, sniffFile, type IntakeError } from "@/lib/int
 import { enqueueJob } from "@/lib/data/jobs";
 import { documentsWithMatters, whereDocumentVisible } from "@/lib/data/document-access";
 import type { CurrentUser } from "@/lib/data/users";
-import { deleteObject, putObject } from "@/storage/s3";
+import { isDatabaseUnavailable } from "@/db/errors";
+import { deleteObject, isStorageUnavailable, putObject } from "@/storage/s3";
+import { RESTRICTED_NOTE } from "@/lib/data/documents";
 import { READ_JOB } from "@/lib/jobs/kinds";
 
 export interface DuplicateOf {
@@ -24,6 +26,17 @@ export type UploadResult =
 
 export const STORAGE_DOWN = "The document store is not answering, so this file was not saved. Nothing was kept; try again in a minute, and tell your admin if it keeps happening.";
 export const DATABASE_DOWN = "The database is not answering, so this file was not saved. Nothing was kept; try again in a minute, and tell your admin if it keeps happening.";
+
+export const STORAGE_REFUSED = "The document store refused this file, so it was not saved. Nothing was kept; tell your admin (the server log has the store's answer).";
+const DATABASE_FAILED = "Foldwright could not save this file because of a problem on our side. Nothing was kept; tell your admin (the server log has the cause).";
+
+/** Logs the cause and answers 503 only when the database is really not answering. */
+function databaseFailure(doing: string, e: unknown): AppError {
+  console.error(`intake: ${doing} failed:`, e);
+  return isDatabaseUnavailable(e)
+    ? new AppError(503, "database_unavailable", DATABASE_DOWN)
+    : new AppError(500, "database_error", DATABASE_FAILED);
+}
 
 function rejected(name: string, error: IntakeError | AppError | { status: number; code: string; message: string }): UploadResult {
   return { name, status: "rejected", error: { code: error.code, message: error.message }, httpStatus: error.status };
@@ -43,7 +56,8 @@ async function describeDuplicate(user: CurrentUser, sha256: string): Promise<Dup
   if (!row) return null;
   const visible = await whereDocumentVisible(documentsWithMatters(db).where("d.id", row.id), user).first("d.id");
   if (!visible) {
-    return { id: null, message: "This exact file is already held, in a matter you do not have access to. It was not stored again. Ask an admin if you need it." };
+    // Nothing of the walled copy — no name, number, matter or date — only that it is held.
+    return { id: null, message: `This exact file is already held and was not stored again. ${RESTRICTED_NOTE}` };
   }
   const where = row.matter
     ? `It is filed in ${row.matter}${row.cabinet ? ` › ${row.cabinet}` : ""}.`
@@ -64,8 +78,8 @@ export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uin
   if (!sniff.ok) return rejected(name, sniff.error);
   const sha256 = sha256Hex(bytes);
 
-  const known = await describeDuplicate(user, sha256).catch(() => {
-    throw new AppError(503, "database_unavailable", DATABASE_DOWN);
+  const known = await describeDuplicate(user, sha256).catch((e) => {
+    throw databaseFailure("checking for a duplicate", e);
   });
   if (known) return { name, status: "duplicate", duplicateOf: known, httpStatus: 200 };
 
@@ -76,8 +90,12 @@ export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uin
       contentType: sniff.mediaType,
       metadata: { sha256, "original-name": encodeURIComponent(name), "uploaded-by": String(user.id) },
     });
-  } catch {
-    return rejected(name, { status: 503, code: "storage_unavailable", message: STORAGE_DOWN });
+  } catch (e) {
+    console.error(`intake: storing the original of "${name}" failed:`, e);
+    // Whatever the store answered, nothing was kept and the object may be half-written.
+    await deleteObject(key).catch(() => {});
+    if (isStorageUnavailable(e)) return rejected(name, { status: 503, code: "storage_unavailable", message: STORAGE_DOWN });
+    return rejected(name, { status: 500, code: "storage_refused", message: STORAGE_REFUSED });
   }
 
   try {
@@ -102,6 +120,7 @@ export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uin
       const winner = await describeDuplicate(user, sha256);
       if (winner) return { name, status: "duplicate", duplicateOf: winner, httpStatus: 200 };
     }
-    return rejected(name, { status: 503, code: "database_unavailable", message: DATABASE_DOWN });
+    const failure = databaseFailure(`saving the row of "${name}"`, e);
+    return rejected(name, failure);
   }
 }

@@ -97,10 +97,16 @@ export async function failJob(job: Job, workerId: string, error: string): Promis
   return giveUp;
 }
 
-/** Jobs whose workers kept dying until no attempts were left: marked failed, returned once. */
-export async function sweepExhaustedJobs(): Promise<Job[]> {
+/**
+ * Jobs of these kinds whose workers kept dying until no attempts were left: marked failed and
+ * returned once, to the pool that handles them (only that pool knows how to give such a job up,
+ * e.g. mark its document unreadable), so a pool never sweeps another pool's jobs.
+ */
+export async function sweepExhaustedJobs(kinds: string[]): Promise<Job[]> {
+  if (kinds.length === 0) return [];
   return getDb().transaction(async (trx) => {
     const rows: Job[] = await trx("jobs")
+      .whereIn("kind", kinds)
       .where("status", "running")
       .whereRaw("leased_until < NOW(3)")
       .whereRaw("attempts >= max_attempts")

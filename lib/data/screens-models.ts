@@ -37,7 +37,7 @@ export async function getCurrentModelReport(user: CurrentUser): Promise<CurrentM
   if (!can(user.role, "models.read")) throw notAllowed("see model versions");
   const current = await findCurrentModel();
   if (!current) return null;
-  const [version, types] = await Promise.all([getModelVersion(current.id), listCabinetTypes()]);
+  const [version, types] = await Promise.all([getModelVersion(user, current.id), listCabinetTypes(user)]);
   const report = (version.metrics ?? {}) as StoredReport;
   const names = new Map(types.map((t) => [String(t.id), t.name]));
   return {

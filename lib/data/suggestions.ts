@@ -4,34 +4,7 @@ import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { completeJob, enqueueJob } from "@/lib/data/jobs";
 import { appendFilingEvent, linkDocumentToMatters } from "@/lib/data/record";
-
-export interface RankedType {
-  cabinetTypeId: number;
-  confidence: number;
-  probability: number | null;
-  source: "model" | "description";
-}
-
-export interface MatterCandidate {
-  matterId: number;
-  score: number;
-  reasons: string[];
-}
-
-export interface NewSuggestion {
-  documentId: number;
-  modelVersionId: number | null;
-  method: "model" | "cold_start" | "blended";
-  ranked: RankedType[];
-  noConfidentMatch: boolean;
-  /** The model's confidence in the top type before blending; null without a model. */
-  modelConfidence: number | null;
-  why: { term: string; weight: number }[];
-  matterCandidates: MatterCandidate[];
-  topMatterId: number | null;
-  matterAmbiguous: boolean;
-  autoFile: boolean;
-}
+import type { NewSuggestion } from "@/lib/filing/suggestion";
 
 export interface DocumentForSuggestion {
   id: number;

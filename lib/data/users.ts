@@ -12,6 +12,13 @@ export interface CurrentUser {
   role: Role;
 }
 
+/**
+ * Foldwright itself, for its own background reads (suggesting, training, the start command):
+ * inside every wall, like an admin. Never a session, and never written as anyone's id — user 0
+ * does not exist, so a write in its name fails on the foreign key.
+ */
+export const FOLDWRIGHT: CurrentUser = Object.freeze({ id: 0, email: "", name: "Foldwright", role: "admin" as const });
+
 interface UserRow extends CurrentUser {
   session_epoch: number;
 }

@@ -58,7 +58,7 @@ export function startWorkers(options: WorkerOptions): Workers {
     while (!stopped) {
       try {
         if (sweeps++ % 30 === 0) {
-          for (const job of await sweepExhaustedJobs()) await options.handlers[job.kind]?.giveUp?.(job, "The worker stopped before finishing, too many times.");
+          for (const job of await sweepExhaustedJobs(kinds)) await options.handlers[job.kind]?.giveUp?.(job, "The worker stopped before finishing, too many times.");
         }
         const free = options.concurrency - running.size;
         const jobs = free > 0 ? await claimJobs(workerId, kinds, free, options.leaseSeconds) : [];

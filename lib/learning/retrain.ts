@@ -3,11 +3,20 @@
 // the artifact in the bucket; promotes the candidate only if its macro-F1 is not more than one
 // point below the current model's settings on the same folds. A failed run leaves the current
 // model serving (promotion is the only step that changes which version is current).
-import { getDb } from "@/db";
-import { enqueueJob } from "@/lib/data/jobs";
 import { withNamedLock } from "@/lib/data/locks";
-import { findCurrentModelParams, promoteModelVersion, updateModelVersion } from "@/lib/data/models";
+import {
+  createTrainingVersion,
+  failAbandonedTrainingRuns,
+  findCurrentModelParams,
+  findTrainingVersion,
+  finishTrainingRun,
+  LeaseLostError,
+  updateModelVersion,
+  type CompleteInTransaction,
+  type TrainingOutcome,
+} from "@/lib/data/models";
 import { getOfficeSettings } from "@/lib/data/settings";
+import { FOLDWRIGHT } from "@/lib/data/users";
 import { loadTrainingSet, type TrainingRow } from "@/lib/data/training-set";
 import { resolveOptions, saveModel, trainModel, type TrainOptionsInput } from "@/lib/ml";
 import { putObject } from "@/storage/s3";
@@ -20,24 +29,9 @@ export const DEFAULT_PARAMS: TrainOptionsInput = { C: resolveOptions().C, thread
 
 export type RetrainRequest = { status: "queued"; versionId: number } | { status: "busy"; versionId: number };
 
-/**
- * A run whose process died without a job to resume it (a start command stopped mid-training)
- * would block every later run: after an hour with no live job it is marked failed.
- */
-async function failAbandonedRuns(): Promise<void> {
-  const db = getDb();
-  await db("model_versions as v")
-    .where("v.status", "training")
-    .whereRaw("v.created_at < NOW(3) - INTERVAL 60 MINUTE")
-    .whereNotExists((q) =>
-      q.select(db.raw("1")).from("jobs as j").where("j.kind", TRAIN_JOB).whereIn("j.status", ["queued", "running"]).whereRaw("JSON_VALUE(j.payload, '$.versionId') = v.id"),
-    )
-    .update({ "v.status": "failed", "v.progress": null, "v.reason": "The run stopped before finishing (its process ended). The current model kept serving." });
-}
-
 /** Trains a version here and now (the start command's first model); returns its id. */
 export async function trainNow(trigger: "start" | "manual"): Promise<number> {
-  const [versionId] = await getDb()("model_versions").insert({ trigger, status: "training", progress: "Starting" });
+  const versionId = await createTrainingVersion(trigger, null);
   await runTraining(versionId);
   return versionId;
 }
@@ -45,15 +39,10 @@ export async function trainNow(trigger: "start" | "manual"): Promise<number> {
 /** Creates a version in "training" and queues its job, unless a run is already under way. */
 export async function requestRetrain(trigger: "nightly" | "manual" | "start", userId: number | null): Promise<RetrainRequest> {
   const result = await withNamedLock("foldwright_retrain_request", 10, async () => {
-    await failAbandonedRuns();
-    const busy = await getDb()("model_versions").where({ status: "training" }).first("id");
-    if (busy) return { status: "busy" as const, versionId: busy.id as number };
-    const versionId = await getDb().transaction(async (trx) => {
-      const [id] = await trx("model_versions").insert({ trigger, requested_by: userId, status: "training", progress: "Waiting for a worker" });
-      await enqueueJob(TRAIN_JOB, null, { versionId: id }, trx);
-      return id as number;
-    });
-    return { status: "queued" as const, versionId };
+    await failAbandonedTrainingRuns(TRAIN_JOB);
+    const busy = await findTrainingVersion();
+    if (busy) return { status: "busy" as const, versionId: busy };
+    return { status: "queued" as const, versionId: await createTrainingVersion(trigger, userId, TRAIN_JOB) };
   });
   if (!result) throw new Error("Could not take the retraining request lock within 10 s.");
   return result;
@@ -70,14 +59,17 @@ function eligible(rows: TrainingRow[], minExamples: number): TrainingRow[] {
   return rows.filter((r) => counts.get(r.label)! >= minExamples);
 }
 
-/** Runs one version's training; returns false when another server holds the training lock. */
-export async function runTraining(versionId: number, hooks: TrainingHooks = {}): Promise<boolean> {
+/**
+ * Runs one version's training; returns false when another server holds the training lock.
+ * `completeJob` (a queued run's) is called inside the transaction that writes the results.
+ */
+export async function runTraining(versionId: number, hooks: TrainingHooks = {}, completeJob?: CompleteInTransaction): Promise<boolean> {
   const ran = await withNamedLock("foldwright_retrain", 0, async () => {
     const started = Date.now();
     const progress = (text: string) => updateModelVersion(versionId, { progress: text });
     try {
       await progress("Gathering human-filed documents");
-      const settings = await getOfficeSettings();
+      const settings = await getOfficeSettings(FOLDWRIGHT);
       const rows = eligible(await loadTrainingSet(), settings.minExamplesPerType);
       const labels = hooks.transformLabels ? hooks.transformLabels(rows.map((r) => r.label)) : rows.map((r) => r.label);
       const docs = rows.map((r, i) => ({ text: r.text, filename: r.filename, meta: r.meta, label: labels[i] }));
@@ -111,8 +103,7 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}):
 
       const counts: Record<string, number> = {};
       for (const l of labels) counts[l] = (counts[l] ?? 0) + 1;
-      await updateModelVersion(versionId, {
-        status: "candidate",
+      const fields = {
         params: JSON.stringify(DEFAULT_PARAMS),
         class_list: JSON.stringify(model.classes.map(Number)),
         class_counts: JSON.stringify(counts),
@@ -130,25 +121,19 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}):
         duration_ms: Date.now() - started,
         finished_at: new Date(),
         progress: null,
-      });
-      if (compared === null) {
-        await promoteModelVersion(versionId, null, "The first model: nothing to compare with.");
-      } else if (report.macroF1 >= compared - PROMOTION_MARGIN) {
-        await promoteModelVersion(versionId, null, `Promoted: macro-F1 ${report.macroF1.toFixed(3)} against ${compared.toFixed(3)} for the current model's settings on the same folds.`);
-      } else {
-        await updateModelVersion(versionId, {
-          status: "rejected",
-          reason: `Not promoted: macro-F1 ${report.macroF1.toFixed(3)} is more than one point below ${compared.toFixed(3)} for the current model on the same folds. The current model keeps serving.`,
-        });
-      }
+      };
+      const outcome: TrainingOutcome =
+        compared === null
+          ? { promote: "The first model: nothing to compare with." }
+          : report.macroF1 >= compared - PROMOTION_MARGIN
+            ? { promote: `Promoted: macro-F1 ${report.macroF1.toFixed(3)} against ${compared.toFixed(3)} for the current model's settings on the same folds.` }
+            : { reject: `Not promoted: macro-F1 ${report.macroF1.toFixed(3)} is more than one point below ${compared.toFixed(3)} for the current model on the same folds. The current model keeps serving.` };
+      await finishTrainingRun(versionId, fields, outcome, completeJob);
     } catch (e) {
-      await updateModelVersion(versionId, {
-        status: "failed",
-        progress: null,
-        finished_at: new Date(),
-        duration_ms: Date.now() - started,
-        reason: `Training failed: ${e instanceof Error ? e.message : String(e)} The current model keeps serving.`.slice(0, 600),
-      });
+      if (e instanceof LeaseLostError) throw e; // another worker owns the run now: write nothing
+      const fields = { finished_at: new Date(), duration_ms: Date.now() - started };
+      const fail = `Training failed: ${e instanceof Error ? e.message : String(e)} The current model keeps serving.`;
+      await finishTrainingRun(versionId, fields, { fail }, completeJob);
     }
     return true;
   });

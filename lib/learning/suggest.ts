@@ -1,9 +1,11 @@
 // Computes a document's suggestion: ranked cabinet types from the current model (or, before any
 // model exists or for types with too few examples, from the types' descriptions and keywords),
 // matter candidates from identifiers in the text, and whether the office's auto-file bar is met.
-import { listAllMatters, listCabinetTypes } from "@/lib/data/catalog";
+import { listCabinetTypes, listVisibleMatters } from "@/lib/data/catalog";
+import { FOLDWRIGHT } from "@/lib/data/users";
 import { getOfficeSettings } from "@/lib/data/settings";
-import type { DocumentForSuggestion, NewSuggestion, RankedType } from "@/lib/data/suggestions";
+import type { DocumentForSuggestion } from "@/lib/data/suggestions";
+import type { NewSuggestion, RankedType } from "@/lib/filing/suggestion";
 import { findKindByMediaType } from "@/lib/intake";
 import { predictDocument, type MlDocument } from "@/lib/ml";
 import { blendWithModel, buildTypeProfiles, rankByProfiles, type TypeProfiles } from "@/lib/filing/cold-start";
@@ -20,7 +22,7 @@ function profilesFor(types: { id: number; name: string; description: string; key
 }
 
 export async function computeSuggestion(doc: DocumentForSuggestion): Promise<NewSuggestion> {
-  const [types, matters, settings, serving] = await Promise.all([listCabinetTypes(true), listAllMatters(), getOfficeSettings(), getServingModel()]);
+  const [types, matters, settings, serving] = await Promise.all([listCabinetTypes(FOLDWRIGHT, true), listVisibleMatters(FOLDWRIGHT), getOfficeSettings(FOLDWRIGHT), getServingModel()]);
   const text = doc.text ?? "";
   const mlDoc: MlDocument = { text, filename: doc.original_name, meta: { kind: findKindByMediaType(doc.media_type) ?? "other", pages: doc.page_count ?? undefined, ocr: Boolean(doc.ocr_used) } };
   const activeIds = new Set(types.map((t) => t.id));

@@ -58,9 +58,10 @@ async function main(): Promise<void> {
     console.log("Retraining (the nightly run, one thread) …");
     const { trainNow } = await import("@/lib/learning/retrain");
     const { getModelVersion } = await import("@/lib/data/models");
+    const { FOLDWRIGHT } = await import("@/lib/data/users");
     const rssBefore = process.memoryUsage().rss / 1048576;
     const t0 = performance.now();
-    const version = await getModelVersion(await trainNow("manual"));
+    const version = await getModelVersion(FOLDWRIGHT, await trainNow("manual"));
     const retrainSeconds = (performance.now() - t0) / 1000;
     const peak = peakRssMb();
 

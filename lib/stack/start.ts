@@ -13,10 +13,11 @@ const dev = process.argv.includes("--dev");
 /** So that the first screen a visitor sees has real suggestions. */
 async function trainFirstModel(): Promise<void> {
   const { findCurrentModel, getModelVersion } = await import("@/lib/data/models");
+  const { FOLDWRIGHT } = await import("@/lib/data/users");
   if (await findCurrentModel()) return;
   console.log("  Training the first model on the demo office's filed documents …");
   const { trainNow } = await import("@/lib/learning/retrain");
-  const v = await getModelVersion(await trainNow("start"));
+  const v = await getModelVersion(FOLDWRIGHT, await trainNow("start"));
   if (v.status === "current") {
     console.log(`  Model version #${v.id}: ${v.trainCount} documents, cross-validated macro-F1 ${v.macroF1?.toFixed(3)}, accuracy ${v.accuracy?.toFixed(3)} (${((v.durationMs ?? 0) / 1000).toFixed(1)} s).`);
   } else {

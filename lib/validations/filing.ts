@@ -5,6 +5,8 @@ export const filingSchema = z.object({
   cabinetTypeId: z.number().int().positive().optional(),
   matterId: z.number().int().positive().optional(),
   reason: z.string().trim().max(600).optional(),
+  expectedCabinetTypeId: z.number().int().positive().optional(),
+  expectedMatterId: z.number().int().positive().optional(),
 });
 
 export const acceptManySchema = z.object({

@@ -38,8 +38,8 @@ const MATRIX: Row[] = [
   { method: "GET", path: () => `/api/documents/${fixtures.open}`, file: "api/documents/[id]/route.ts", expect: all(200, 401) },
   { method: "GET", path: () => `/api/documents/${fixtures.open}/original`, file: "api/documents/[id]/original/route.ts", expect: all(200, 401) },
   // The restricted demo matter's team is the partner (and admins see everything).
-  { method: "GET", path: () => `/api/documents/${fixtures.walled}`, file: "api/documents/[id]/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 403, partner: 200, admin: 200, auditor: 403 } },
-  { method: "GET", path: () => `/api/documents/${fixtures.walled}/original`, file: "api/documents/[id]/original/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 403, partner: 200, admin: 200, auditor: 403 } },
+  { method: "GET", path: () => `/api/documents/${fixtures.walled}`, file: "api/documents/[id]/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 404, partner: 200, admin: 200, auditor: 404 } },
+  { method: "GET", path: () => `/api/documents/${fixtures.walled}/original`, file: "api/documents/[id]/original/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 404, partner: 200, admin: 200, auditor: 404 } },
   // Filing: a body that names no action is a 422 for the roles that may file.
   { method: "POST", path: () => `/api/documents/${fixtures.open}/filing`, file: "api/documents/[id]/filing/route.ts", body: {}, expect: { signedOut: 401, clerk: 422, partner: 422, admin: 422, auditor: 403 } },
   { method: "GET", path: "/api/review", file: "api/review/route.ts", expect: { signedOut: 401, clerk: 200, partner: 200, admin: 200, auditor: 403 } },
@@ -55,7 +55,7 @@ const MATRIX: Row[] = [
   { method: "GET", path: "/api/settings", file: "api/settings/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
   { method: "PATCH", path: "/api/settings", file: "api/settings/route.ts", body: { autoFileTarget: 0.98 }, expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 403 } },
   { method: "GET", path: () => `/documents/${fixtures.open}`, file: "(app)/documents/[id]/page.tsx", expect: page(["clerk", "partner", "admin", "auditor"]) },
-  { method: "GET", path: () => `/documents/${fixtures.walled}`, file: "(app)/documents/[id]/page.tsx", note: "restricted matter", expect: page(["partner", "admin"]) },
+  { method: "GET", path: () => `/documents/${fixtures.walled}`, file: "(app)/documents/[id]/page.tsx", note: "restricted matter", expect: { signedOut: 307, clerk: 404, partner: 200, admin: 200, auditor: 404 } },
   { method: "GET", path: "/intake", file: "(app)/intake/page.tsx", expect: page(["clerk", "admin"]) },
   { method: "GET", path: "/review", file: "(app)/review/page.tsx", expect: page(["clerk", "partner", "admin"]) },
   { method: "GET", path: "/cabinets", file: "(app)/cabinets/page.tsx", expect: page(["clerk", "partner", "admin", "auditor"]) },

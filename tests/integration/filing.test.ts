@@ -91,7 +91,7 @@ describe("the filing record", () => {
     await expect(fileDocument(clerk, d, { action: "file", cabinetTypeId: types.get("Contracts & leases"), matterId })).rejects.toMatchObject({ status: 409 });
     const walled = (await owner("matters").where({ restricted: true }).first("id")).id;
     const e = await insertUnfiledDocument(owner, "Contracts & leases");
-    await expect(fileDocument(clerk, e, { action: "file", cabinetTypeId: types.get("Contracts & leases"), matterId: walled })).rejects.toMatchObject({ status: 403 });
+    await expect(fileDocument(clerk, e, { action: "file", cabinetTypeId: types.get("Contracts & leases"), matterId: walled })).rejects.toMatchObject({ status: 422 });
     expect((await owner("documents").where({ id: e }).first()).filed_at).toBeNull();
   });
 });

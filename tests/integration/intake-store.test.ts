@@ -74,7 +74,7 @@ describe("storing an upload", () => {
     await owner("documents").where({ id: first.id }).update({ matter_id: walled.id });
     const again = await storeUpload(clerk, "walled.pdf", bytes);
     expect(again).toMatchObject({ status: "duplicate", duplicateOf: { id: null } });
-    if (again.status === "duplicate") expect(again.duplicateOf.message).toMatch(/in a matter you do not have access to/);
+    if (again.status === "duplicate") expect(again.duplicateOf.message).toMatch(/already held and was not stored again. Restricted — ask the matter's team./);
   });
 
   it("answers 503 and keeps nothing when storage stops before the upload", async () => {

@@ -13,7 +13,7 @@ export const metadata: Metadata = { title: "Models" };
 export default async function ModelsPage() {
   const { user, allowed } = await requirePageUser("models.read");
   if (!allowed) forbidden();
-  const [versions, settings, report] = await Promise.all([listModelVersions(), getOfficeSettings(), getCurrentModelReport(user)]);
+  const [versions, settings, report] = await Promise.all([listModelVersions(user), getOfficeSettings(user), getCurrentModelReport(user)]);
   // The same shape as GET /api/models, so the screen starts filled and then follows the route.
   const initial = {
     versions,

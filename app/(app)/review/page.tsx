@@ -9,7 +9,7 @@ export const metadata: Metadata = { title: "To review" };
 export default async function ReviewPage() {
   const { user, allowed } = await requirePageUser("filing.decide");
   if (!allowed) forbidden();
-  const [types, matters] = await Promise.all([listCabinetTypes(true), listVisibleMatters(user)]);
+  const [types, matters] = await Promise.all([listCabinetTypes(user, true), listVisibleMatters(user)]);
   return (
     <section>
       <h1 className="font-serif text-2xl">To review</h1>

@@ -6,7 +6,7 @@ import { listCabinetTypes } from "@/lib/data/catalog";
 export const dynamic = "force-dynamic";
 
 export const GET = handle(async () => {
-  await requireUser("documents.read", "see cabinet types");
-  const items = await listCabinetTypes();
+  const user = await requireUser("documents.read", "see cabinet types");
+  const items = await listCabinetTypes(user);
   return NextResponse.json({ items, total: items.length, page: 1, pageSize: items.length });
 });

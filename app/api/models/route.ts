@@ -7,8 +7,8 @@ import { getOfficeSettings } from "@/lib/data/settings";
 export const dynamic = "force-dynamic";
 
 export const GET = handle(async () => {
-  await requireUser("models.read", "see model versions");
-  const [versions, settings] = await Promise.all([listModelVersions(), getOfficeSettings()]);
+  const user = await requireUser("models.read", "see model versions");
+  const [versions, settings] = await Promise.all([listModelVersions(user), getOfficeSettings(user)]);
   return NextResponse.json({
     versions,
     current: versions.find((v) => v.status === "current")?.id ?? null,

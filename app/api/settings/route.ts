@@ -7,8 +7,8 @@ import { settingsSchema } from "@/lib/validations/filing";
 export const dynamic = "force-dynamic";
 
 export const GET = handle(async () => {
-  await requireUser("models.read", "see the office settings");
-  return NextResponse.json({ settings: await getOfficeSettings() });
+  const user = await requireUser("models.read", "see the office settings");
+  return NextResponse.json({ settings: await getOfficeSettings(user) });
 });
 
 export const PATCH = handle(async (request: Request) => {

@@ -36,7 +36,7 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
   const id = documentIdSchema.safeParse((await params).id);
   if (!id.success) notFound();
   const document = await loadDocument(user, id.data); // checks access before anything else is read
-  const [suggestion, timeline] = await Promise.all([getLatestSuggestion(user, id.data), listDocumentTimeline(id.data)]);
+  const [suggestion, timeline] = await Promise.all([getLatestSuggestion(user, id.data), listDocumentTimeline(user, id.data)]);
   const state = documentState(document, suggestion, timeline);
 
   return (

@@ -11,6 +11,6 @@ export const GET = handle(async (_request: Request, { params }: { params: Promis
   const user = await requireUser("documents.read", "see documents");
   const id = documentIdSchema.parse((await params).id);
   const document = await getDocument(user, id); // checks access first
-  const [suggestion, timeline] = await Promise.all([getLatestSuggestion(user, id), listDocumentTimeline(id)]);
+  const [suggestion, timeline] = await Promise.all([getLatestSuggestion(user, id), listDocumentTimeline(user, id)]);
   return NextResponse.json({ document, suggestion, timeline });
 });

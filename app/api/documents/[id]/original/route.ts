@@ -4,7 +4,7 @@ import { requireUser } from "@/lib/data/current-user";
 import { findOriginal } from "@/lib/data/documents";
 import { documentIdSchema } from "@/lib/validations/documents";
 import { AppError } from "@/lib/errors";
-import { getObjectStream } from "@/storage/s3";
+import { getObjectStream, isMissingObject, isStorageUnavailable } from "@/storage/s3";
 
 export const dynamic = "force-dynamic";
 
@@ -21,8 +21,15 @@ export const GET = handle(async (_request: Request, { params }: { params: Promis
   let stream: Readable;
   try {
     stream = await getObjectStream(original.key);
-  } catch {
-    throw new AppError(503, "storage_unavailable", "The document store is not answering, so the original cannot be sent now. Try again in a minute.");
+  } catch (e) {
+    console.error(`original of document ${id}: the store answered`, e);
+    if (isMissingObject(e)) {
+      throw new AppError(404, "original_missing", "The original of this document is not in the document store. Tell your admin: it may need restoring from a backup.");
+    }
+    if (isStorageUnavailable(e)) {
+      throw new AppError(503, "storage_unavailable", "The document store is not answering, so the original cannot be sent now. Try again in a minute.");
+    }
+    throw new AppError(500, "storage_refused", "The document store refused to send this original. Tell your admin (the server log has the store's answer).");
   }
   return new Response(Readable.toWeb(stream) as ReadableStream, {
     headers: {

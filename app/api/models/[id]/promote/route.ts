@@ -9,5 +9,5 @@ export const POST = handle(async (_request: Request, { params }: { params: Promi
   const user = await requireUser("models.manage", "promote or roll back models");
   const id = z.coerce.number().int().positive().parse((await params).id);
   await promoteModelVersion(id, user.id, `Made current by ${user.name}.`);
-  return NextResponse.json({ version: await getModelVersion(id) });
+  return NextResponse.json({ version: await getModelVersion(user, id) });
 });
