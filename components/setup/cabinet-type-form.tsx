@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useCallback, useState } from "react";
+import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { requestJson } from "@/components/ui/request-json";
 import { RETENTION_CAUTION } from "@/lib/retention";
@@ -40,7 +40,7 @@ const toInput = (v: CabinetTypeFormValues) => ({
 /** Add or edit a cabinet type; checked as you type with the route's own schema. What was typed stays on an error. */
 export function CabinetTypeForm({ id, initial, retentionImpact }: Props) {
   const router = useRouter();
-  const form = useSchemaForm(cabinetTypeSchema, initial, useCallback(toInput, []));
+  const form = useSchemaForm(cabinetTypeSchema, initial, toInput);
   const [busy, setBusy] = useState(false);
   const [serverError, setServerError] = useState<string | null>(null);
   const { values, set, errors } = form;
