@@ -5,6 +5,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { AppError, badInput, notFound } from "@/lib/errors";
+import { enqueueJob } from "@/lib/data/jobs";
 import { appendFilingEvent } from "@/lib/data/record";
 import { appendSetupEvent } from "@/lib/data/setup-record";
 import { changedFields, isDuplicateKey, parseJson } from "@/lib/data/setup-shared";
@@ -94,6 +95,23 @@ async function refuseDuplicateName(db: Knex | Knex.Transaction, name: string, ex
 const duplicateName = (name: string, active = true) =>
   new AppError(409, "duplicate_name", `A cabinet type named "${name}" already exists${active ? "" : " (retired: restore it instead)"}. Choose another name.`);
 
+/**
+ * Documents waiting in To review whose latest suggestion puts a just-retired type on top are
+ * suggested again (in the caller's transaction), so the queue never offers a retired type first.
+ */
+async function resuggestAfterRetire(trx: Knex.Transaction, typeId: number): Promise<number> {
+  const ids: number[] = await trx("documents as d")
+    .join("suggestions as s", "s.document_id", "d.id")
+    .where("d.status", "ready")
+    .whereNull("d.filed_at")
+    .where("s.top_cabinet_type_id", typeId)
+    .whereRaw("s.id = (SELECT MAX(s2.id) FROM suggestions s2 WHERE s2.document_id = d.id)")
+    .distinct()
+    .pluck("d.id");
+  for (const id of ids) await enqueueJob("suggest", id, null, trx);
+  return ids.length;
+}
+
 export async function createCabinetType(user: CurrentUser, input: CabinetTypeInput): Promise<CabinetType> {
   const db = getDb();
   try {
@@ -132,6 +150,7 @@ export async function updateCabinetType(user: CurrentUser, id: number, patch: Ca
       const diff = changedFields(snapshot(before), snapshot(after));
       if (Object.keys(diff.after).length === 0) return before;
       await trx("cabinet_types").where({ id }).update({ ...toRow(after), active: after.active, updated_at: trx.fn.now() });
+      if (before.active && !after.active) await resuggestAfterRetire(trx, id);
       // Before and after carry the name each side had, so the record reads right after a rename.
       await appendSetupEvent(trx, {
         userId: user.id,
@@ -182,6 +201,7 @@ export async function mergeCabinetType(user: CurrentUser, id: number, intoId: nu
       });
     }
     if (from.active) await trx("cabinet_types").where({ id }).update({ active: false, updated_at: trx.fn.now() });
+    await resuggestAfterRetire(trx, id);
     await appendSetupEvent(trx, {
       userId: user.id,
       entity: "cabinet_type",

@@ -4,7 +4,7 @@ import { closeDb } from "@/db";
 import { appendFilingEvent } from "@/lib/data/record";
 import { listFilingEvents } from "@/lib/data/filing-record";
 import { createCabinetType, listCabinetTypesWithCounts, mergeCabinetType, updateCabinetType } from "@/lib/data/setup-cabinet-types";
-import { findDocumentForSuggestion } from "@/lib/data/suggestions";
+import { findDocumentForSuggestion, saveSuggestion } from "@/lib/data/suggestions";
 import { forgetServingModel } from "@/lib/learning/model-store";
 import { requestRetrain, runTraining } from "@/lib/learning/retrain";
 import { computeSuggestion } from "@/lib/learning/suggest";
@@ -64,6 +64,17 @@ describe("creating and changing cabinet types", () => {
     expect((await listCabinetTypesWithCounts()).find((x) => x.id === t.id)?.active).toBe(false);
     await updateCabinetType(admin, t.id, { active: true });
     expect((await lastSetupEvent(t.id)).action).toBe("restored");
+  });
+
+  it("suggests again the documents waiting in To review whose suggestion put a just-retired type on top", async () => {
+    const t = await createCabinetType(admin, { ...base, name: `Resuggest probe ${unique()}` });
+    const waiting = await insertReadDocument(owner, "Waiting for review.", "waiting.pdf");
+    await saveSuggestion(null, null, { documentId: waiting, modelVersionId: null, method: "cold_start", ranked: [{ cabinetTypeId: t.id, confidence: 1, probability: null, source: "description" }], noConfidentMatch: false, modelConfidence: null, why: [], matterCandidates: [], topMatterId: null, matterAmbiguous: false, autoFile: false });
+    const queued = () => owner("jobs").where({ kind: "suggest", document_id: waiting, status: "queued" }).count({ n: "*" });
+    expect(await queued()).toEqual([{ n: 0 }]);
+    await updateCabinetType(admin, t.id, { active: false });
+    expect(await queued()).toEqual([{ n: 1 }]);
+    await owner("jobs").where({ kind: "suggest", document_id: waiting }).delete();
   });
 });
 
