@@ -7,16 +7,8 @@ import { requestJson } from "@/components/ui/request-json";
 import { RETENTION_CAUTION } from "@/lib/retention";
 import { cabinetTypeSchema, MAX_RETENTION_YEARS, type RetentionTrigger } from "@/lib/validations/setup";
 import { described, Field, INPUT } from "./field";
+import type { CabinetTypeFormValues } from "./form-values";
 import { splitList, useSchemaForm } from "./use-schema-form";
-
-export interface CabinetTypeFormValues {
-  name: string;
-  description: string;
-  keywords: string;
-  retentionYears: string;
-  retentionTrigger: RetentionTrigger;
-  retentionSource: string;
-}
 
 interface Props {
   /** The type being edited; none for a new one. */
@@ -25,8 +17,6 @@ interface Props {
   /** Issue 11 shows here how many filed documents a retention change affects. */
   retentionImpact?: React.ReactNode;
 }
-
-export const EMPTY_TYPE: CabinetTypeFormValues = { name: "", description: "", keywords: "", retentionYears: "7", retentionTrigger: "after_filing", retentionSource: "" };
 
 const toInput = (v: CabinetTypeFormValues) => ({
   name: v.name,

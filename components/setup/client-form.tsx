@@ -6,16 +6,8 @@ import { Button } from "@/components/ui/button";
 import { requestJson } from "@/components/ui/request-json";
 import { clientSchema } from "@/lib/validations/setup";
 import { described, Field, INPUT } from "./field";
+import type { ClientFormValues } from "./form-values";
 import { splitList, useSchemaForm } from "./use-schema-form";
-
-export interface ClientFormValues {
-  name: string;
-  aliases: string;
-  emailDomains: string;
-  taxIdLast4: string;
-}
-
-export const EMPTY_CLIENT: ClientFormValues = { name: "", aliases: "", emailDomains: "", taxIdLast4: "" };
 
 const toInput = (v: ClientFormValues) => ({ name: v.name, aliases: splitList(v.aliases), emailDomains: splitList(v.emailDomains), taxIdLast4: v.taxIdLast4.trim() === "" ? null : v.taxIdLast4 });
 

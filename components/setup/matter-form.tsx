@@ -7,18 +7,8 @@ import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { requestJson } from "@/components/ui/request-json";
 import { matterSchema } from "@/lib/validations/setup";
 import { described, Field, INPUT } from "./field";
+import { todayUtc, type MatterFormValues } from "./form-values";
 import { useSchemaForm } from "./use-schema-form";
-
-export interface MatterFormValues {
-  clientId: string;
-  number: string;
-  title: string;
-  openedOn: string;
-  status: "open" | "closed";
-  closedOn: string;
-  restricted: boolean;
-  team: number[];
-}
 
 export interface Person {
   id: number;
@@ -36,8 +26,6 @@ interface Props {
   retentionImpact?: React.ReactNode;
 }
 
-const today = () => new Date().toISOString().slice(0, 10);
-export const emptyMatter = (): MatterFormValues => ({ clientId: "", number: "", title: "", openedOn: today(), status: "open", closedOn: "", restricted: false, team: [] });
 
 const toInput = (v: MatterFormValues) => ({
   clientId: v.clientId ? Number(v.clientId) : undefined,
@@ -90,7 +78,7 @@ export function MatterForm({ id, initial, clients, people, retentionImpact }: Pr
   const toggle = (personId: number, on: boolean) => set("team", on ? [...values.team, personId] : values.team.filter((x) => x !== personId));
   const setStatus = (status: "open" | "closed") => {
     set("status", status);
-    if (status === "closed" && !values.closedOn) set("closedOn", today());
+    if (status === "closed" && !values.closedOn) set("closedOn", todayUtc());
   };
 
   return (
