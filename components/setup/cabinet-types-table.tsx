@@ -32,7 +32,7 @@ export function CabinetTypesTable({ rows, activeTypes, params, sort, dir, minExa
         <thead>
           <tr>
             {header("Name", "name")}
-            <th scope="col" className={TH}>Keywords</th>
+            <th scope="col" className={cn(TH, "hidden lg:table-cell")}>Keywords</th>
             {header("Retention", "retention")}
             {header("Filed", "filed")}
             {header("Model", "learning")}
@@ -51,7 +51,7 @@ export function CabinetTypesTable({ rows, activeTypes, params, sort, dir, minExa
                   {!t.active && <span className="ml-2 rounded bg-paper-deep px-1.5 py-0.5 text-xs text-ink-soft">Retired</span>}
                   <p className="line-clamp-2 max-w-md text-xs text-ink-soft">{t.description}</p>
                 </td>
-                <td className={cn(TD, "max-w-52 text-xs")}>{t.keywords.join(", ") || <span className="text-ink-faint">none</span>}</td>
+                <td className={cn(TD, "hidden max-w-52 text-xs lg:table-cell")}>{t.keywords.join(", ") || <span className="text-ink-faint">none</span>}</td>
                 <td className={cn(TD, "whitespace-nowrap text-xs")}>{retentionWords(t.retentionYears, t.retentionTrigger)}</td>
                 <td className={cn(TD, "text-right font-mono text-xs")}>{t.filedCount}</td>
                 <td className={cn(TD, "max-w-56 text-xs", status.tone === "cold" && "text-amber")} data-testid="learning-status">
