@@ -91,12 +91,13 @@ async function requireClient(db: Db, id: number): Promise<string> {
   return c.name;
 }
 
-async function requireTeam(db: Db, ids: number[]): Promise<TeamMember[]> {
+/** The people of a team; someone who can no longer sign in may stay on a team, never join one. */
+async function requireTeam(db: Db, ids: number[], alreadyOn: number[] = []): Promise<TeamMember[]> {
   const unique = [...new Set(ids)];
   const found: (TeamMember & { active: number })[] = unique.length ? await db("users").whereIn("id", unique).select("id", "name", "email", "active") : [];
   const missing = unique.filter((id) => !found.some((u) => u.id === id));
   if (missing.length) throw badInput(`No person with id ${missing.join(", ")} exists in this office. Pick team members from the list of people.`);
-  const inactive = found.filter((u) => !u.active);
+  const inactive = found.filter((u) => !u.active && !alreadyOn.includes(u.id));
   if (inactive.length) throw badInput(`${inactive.map((u) => u.name).join(", ")} can no longer sign in. Leave them off the team, or ask an admin to reactivate them.`);
   return found.map(({ id, name, email }) => ({ id, name, email }));
 }
@@ -182,7 +183,7 @@ export async function updateMatter(user: CurrentUser, id: number, patch: MatterP
       if (patch.status === "open" && patch.closedOn === undefined) merged.closedOn = null;
       const checked = matterSchema.parse(merged);
       const clientName = checked.clientId === before.clientId ? before.clientName : await requireClient(trx, checked.clientId);
-      const team = await requireTeam(trx, checked.team);
+      const team = await requireTeam(trx, checked.team, before.team.map((p) => p.id));
       if (checked.number !== before.number) await refuseDuplicateNumber(trx, checked.number, id);
       const diff = changedFields(snapshot(before), snapshot({ ...checked, clientName }));
       if (Object.keys(diff.after).length) {

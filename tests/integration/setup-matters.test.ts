@@ -94,6 +94,17 @@ describe("matters and teams", () => {
     expect(events[4].after.team).toEqual([who.partner.name]);
   });
 
+  it("lets someone who can no longer sign in stay on a team (so the matter can still be edited), never join one", async () => {
+    const c = await newClient();
+    const [leaver] = await owner("users").insert({ email: `leaver-${unique()}@example.com`, name: "Former Clerk", role: "clerk", password_hash: "x" });
+    const m = await createMatter(who.admin, matterInput(c.id, { team: [leaver] }));
+    await owner("users").where({ id: leaver }).update({ active: false });
+    expect(await updateMatter(who.admin, m.id, { title: "Renamed while a leaver is on it" })).toMatchObject({ title: "Renamed while a leaver is on it" });
+    const other = await createMatter(who.admin, matterInput(c.id));
+    await expect(updateMatter(who.admin, other.id, { team: [leaver] })).rejects.toMatchObject({ status: 422, message: "Former Clerk can no longer sign in. Leave them off the team, or ask an admin to reactivate them." });
+    expect((await updateMatter(who.admin, m.id, { team: [] })).team).toEqual([]);
+  });
+
   it("keeps a client whose only matter is walled off out of an outsider's client list, and its events out of their record", async () => {
     const c = await newClient();
     const m = await createMatter(who.admin, matterInput(c.id, { restricted: true, team: [who.partner.id] }));

@@ -7,7 +7,7 @@ import { EMPTY_CLIENT, emptyMatter } from "@/components/setup/form-values";
 import { ClientsTable } from "@/components/setup/clients-table";
 import { INPUT } from "@/components/setup/field";
 import { hrefWith, matchesQuery, pick, readParams, sortBy, type SearchParams } from "@/components/setup/list-query";
-import { MatterForm } from "@/components/setup/matter-form";
+import { MatterForm, type Person } from "@/components/setup/matter-form";
 import { MattersTable } from "@/components/setup/matters-table";
 import { SetupHeader } from "@/components/setup/setup-header";
 import { Notice } from "@/components/ui/notice";
@@ -22,6 +22,12 @@ const PATH = "/setup/matters";
 const ALL_MATTERS = 100_000;
 const SORTS = ["number", "title", "client", "opened", "status"] as const;
 const DONE: Record<string, string> = { "client-created": "added.", "client-saved": "saved.", "matter-created": "added.", "matter-saved": "saved." };
+
+/** A team member who can no longer sign in still shows on their matter's form, so they can be taken off. */
+function withFormerMembers(people: Person[], matter: Matter): Person[] {
+  const former = matter.team.filter((m) => !people.some((p) => p.id === m.id)).map((m) => ({ ...m, role: "can no longer sign in" }));
+  return [...people, ...former];
+}
 
 export default async function MattersPage({ searchParams }: { searchParams: Promise<SearchParams> }) {
   const { user, allowed } = await requirePageUser("setup.manage");
@@ -143,7 +149,7 @@ export default async function MattersPage({ searchParams }: { searchParams: Prom
                 key={editingMatter === "new" ? "new" : editingMatter.id}
                 id={editingMatter === "new" ? undefined : editingMatter.id}
                 clients={clients.map(({ id, name }) => ({ id, name }))}
-                people={people}
+                people={editingMatter === "new" ? people : withFormerMembers(people, editingMatter)}
                 initial={
                   editingMatter === "new"
                     ? { ...emptyMatter(), clientId: params.mclient ?? "" }
