@@ -63,6 +63,7 @@ describe("Setup in a browser", () => {
     await typeForm.getByLabel(/Keywords/).fill("marine survey, hull, vessel, surveyor");
     await typeForm.getByLabel("Years", { exact: true }).fill("7");
     await typeForm.getByLabel("Source", { exact: true }).fill("common practice");
+    await page.screenshot({ path: "/tmp/foldwright-setup-type-form.png" }); // looked at by hand, not compared
     await page.getByTestId("save-cabinet-type").click();
     const typeRow = page.locator(`[data-testid="cabinet-type-row"][data-name="${typeName}"]`);
     await typeRow.waitFor();
@@ -95,6 +96,9 @@ describe("Setup in a browser", () => {
     await matterRow.waitFor();
     expect(await matterRow.textContent()).toContain("Restricted");
     await page.screenshot({ path: "/tmp/foldwright-setup-matters.png" });
+    await page.goto(`${BASE_URL}/history/setup`);
+    await page.getByTestId("setup-record-table").waitFor();
+    await page.screenshot({ path: "/tmp/foldwright-setup-record.png" });
     await admin.close();
 
     const type = await owner("cabinet_types").where({ name: typeName }).first("id");
