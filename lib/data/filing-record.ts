@@ -4,6 +4,7 @@ import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { listCabinetTypes, listVisibleMatters } from "@/lib/data/catalog";
 import { canSeeDocument, whereDocumentVisible } from "@/lib/data/document-access";
+import { loadNameHistory, nameAt } from "@/lib/data/historic-names";
 import { notFound } from "@/lib/errors";
 import type { CurrentUser } from "@/lib/data/users";
 
@@ -36,6 +37,7 @@ function events(db: Knex) {
       "e.id", "e.document_id", "d.original_name", "e.created_at", "e.action", "u.name as user_name",
       "fc.name as from_type", "tc.name as to_type", "fm.number as from_matter", "tm.number as to_matter",
       "e.model_version_id", "e.confidence", "e.reason",
+      "e.from_cabinet_type_id", "e.to_cabinet_type_id", "e.from_matter_id", "e.to_matter_id",
     );
 }
 
@@ -55,6 +57,27 @@ const toEvent = (r: Record<string, unknown>): FilingEvent => ({
   reason: (r.reason as string | null) ?? null,
 });
 
+/** Events with the cabinet type names and matter numbers they had when they happened (a rename later changes nothing). */
+async function withHistoricNames(db: Knex, rows: Record<string, unknown>[]): Promise<FilingEvent[]> {
+  const ids = (keys: string[]) => rows.flatMap((r) => keys.map((k) => Number(r[k])));
+  const [types, matters] = await Promise.all([
+    loadNameHistory(db, "cabinet_type", ids(["from_cabinet_type_id", "to_cabinet_type_id"])),
+    loadNameHistory(db, "matter", ids(["from_matter_id", "to_matter_id"])),
+  ]);
+  const id = (v: unknown) => (v === null || v === undefined ? null : Number(v));
+  return rows.map((r) => {
+    const e = toEvent(r);
+    const at = new Date(e.at);
+    return {
+      ...e,
+      fromCabinetType: nameAt(types, "cabinet_type", id(r.from_cabinet_type_id), at, e.fromCabinetType),
+      toCabinetType: nameAt(types, "cabinet_type", id(r.to_cabinet_type_id), at, e.toCabinetType),
+      fromMatter: nameAt(matters, "matter", id(r.from_matter_id), at, e.fromMatter),
+      toMatter: nameAt(matters, "matter", id(r.to_matter_id), at, e.toMatter),
+    };
+  });
+}
+
 /**
  * One document's record, for someone who may see the document (else 404, as if it did not exist).
  * A visible document is linked to no matter walled off from this user, so no event of its
@@ -62,7 +85,8 @@ const toEvent = (r: Record<string, unknown>): FilingEvent => ({
  */
 export async function listDocumentTimeline(user: CurrentUser, documentId: number): Promise<FilingEvent[]> {
   if (!(await canSeeDocument(user, documentId))) throw notFound("That document");
-  return (await events(getDb()).where("e.document_id", documentId).orderBy("e.id")).map(toEvent);
+  const db = getDb();
+  return withHistoricNames(db, await events(db).where("e.document_id", documentId).orderBy("e.id"));
 }
 
 export interface EventFilters {
@@ -84,7 +108,7 @@ export async function listFilingEvents(user: CurrentUser, f: EventFilters): Prom
   if (f.to) q.where("e.created_at", "<", f.to);
   const [{ total }] = await q.clone().clearSelect().count({ total: "e.id" });
   const rows = await q.orderBy("e.id", "desc").limit(f.pageSize).offset((f.page - 1) * f.pageSize);
-  return { items: rows.map(toEvent), total: Number(total) };
+  return { items: await withHistoricNames(db, rows), total: Number(total) };
 }
 
 export interface SuggestionDetail {

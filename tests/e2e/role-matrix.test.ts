@@ -22,6 +22,7 @@ interface Row {
 
 const all = (signedIn: number, signedOut: number) =>
   ({ signedOut, clerk: signedIn, partner: signedIn, admin: signedIn, auditor: signedIn }) as Record<Who, number>;
+const adminWrite = (adminStatus: number) => ({ signedOut: 401, clerk: 403, partner: 403, admin: adminStatus, auditor: 403 }) as Record<Who, number>;
 const page = (allowed: Who[]) =>
   Object.fromEntries(WHO.map((w) => [w, w === "signedOut" ? 307 : allowed.includes(w) ? 200 : 403])) as Record<Who, number>;
 
@@ -51,7 +52,20 @@ const MATRIX: Row[] = [
   { method: "POST", path: "/api/models/retrain", file: "api/models/retrain/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 202, auditor: 403 } },
   { method: "POST", path: "/api/models/999999/promote", file: "api/models/[id]/promote/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 404, auditor: 403 } },
   { method: "GET", path: "/api/cabinet-types", file: "api/cabinet-types/route.ts", expect: all(200, 401) },
+  { method: "GET", path: "/api/cabinet-types?all=1", file: "api/cabinet-types/route.ts", note: "with retired", expect: all(200, 401) },
+  // Setup writes: admins only. A body that fails the schema (or an id that does not exist) shows the
+  // admin passed the role check without changing anything the other rows read.
+  { method: "POST", path: "/api/cabinet-types", file: "api/cabinet-types/route.ts", body: {}, expect: adminWrite(422) },
+  { method: "PATCH", path: "/api/cabinet-types/999999", file: "api/cabinet-types/[id]/route.ts", body: { name: "Matrix probe" }, expect: adminWrite(404) },
+  { method: "POST", path: "/api/cabinet-types/999999/merge", file: "api/cabinet-types/[id]/merge/route.ts", body: { intoId: 1 }, expect: adminWrite(404) },
+  { method: "GET", path: "/api/clients", file: "api/clients/route.ts", expect: all(200, 401) },
+  { method: "POST", path: "/api/clients", file: "api/clients/route.ts", body: {}, expect: adminWrite(422) },
+  { method: "PATCH", path: "/api/clients/999999", file: "api/clients/[id]/route.ts", body: { name: "Matrix probe" }, expect: adminWrite(404) },
   { method: "GET", path: "/api/matters", file: "api/matters/route.ts", expect: all(200, 401) },
+  { method: "POST", path: "/api/matters", file: "api/matters/route.ts", body: {}, expect: adminWrite(422) },
+  { method: "PATCH", path: "/api/matters/999999", file: "api/matters/[id]/route.ts", body: { title: "Matrix probe" }, expect: adminWrite(404) },
+  { method: "GET", path: "/api/setup-events", file: "api/setup-events/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
+  { method: "GET", path: "/api/setup-events?format=csv", file: "api/setup-events/route.ts", note: "CSV", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
   { method: "GET", path: "/api/settings", file: "api/settings/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
   { method: "PATCH", path: "/api/settings", file: "api/settings/route.ts", body: { autoFileTarget: 0.98 }, expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 403 } },
   { method: "GET", path: () => `/documents/${fixtures.open}`, file: "(app)/documents/[id]/page.tsx", expect: page(["clerk", "partner", "admin", "auditor"]) },
@@ -62,6 +76,9 @@ const MATRIX: Row[] = [
   { method: "GET", path: "/history", file: "(app)/history/page.tsx", expect: page(["admin", "auditor"]) },
   { method: "GET", path: "/models", file: "(app)/models/page.tsx", expect: page(["admin", "auditor"]) },
   { method: "GET", path: "/setup", file: "(app)/setup/page.tsx", expect: page(["admin"]) },
+  { method: "GET", path: "/setup/cabinet-types", file: "(app)/setup/cabinet-types/page.tsx", expect: page(["admin"]) },
+  { method: "GET", path: "/setup/matters", file: "(app)/setup/matters/page.tsx", expect: page(["admin"]) },
+  { method: "GET", path: "/history/setup", file: "(app)/history/setup/page.tsx", expect: page(["admin", "auditor"]) },
 ];
 
 const clients = {} as Record<Who, Client>;

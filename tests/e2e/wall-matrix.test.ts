@@ -76,6 +76,11 @@ const SURFACES: Surface[] = [
   { name: "Cabinets of the matter", file: "(app)/cabinets/page.tsx", path: () => `/cabinets?matter=${fx.restrictedId}`, roles: ALL_READERS, shows: ["filed"] },
   { name: "matter picker", file: "api/matters/route.ts", path: () => "/api/matters", roles: ALL_READERS, shows: [] },
   { name: "To review page", file: "(app)/review/page.tsx", path: () => "/review", roles: DECIDERS, shows: [] },
+  { name: "client list", file: "api/clients/route.ts", path: () => "/api/clients", roles: ALL_READERS, shows: [] },
+  { name: "setup record", file: "api/setup-events/route.ts", path: () => "/api/setup-events?pageSize=200", roles: AUDIT, shows: [] },
+  { name: "setup record as CSV", file: "api/setup-events/route.ts", path: () => "/api/setup-events?format=csv", roles: AUDIT, shows: [] },
+  { name: "setup record page", file: "(app)/history/setup/page.tsx", path: () => "/history/setup", roles: AUDIT, shows: [] },
+  { name: "Setup: clients & matters", file: "(app)/setup/matters/page.tsx", path: () => "/setup/matters", roles: ["admin"], shows: [] },
 ];
 
 /** Pages and GET routes that carry nothing of any document or matter, with the reason. */
@@ -85,6 +90,7 @@ const EXEMPT: Record<string, string> = {
   "(app)/intake/page.tsx": "the page is a drop zone; its list comes from GET /api/documents?mine=1 (checked below)",
   "(app)/models/page.tsx": "office-wide model figures per cabinet type; no matter, document or name",
   "(app)/setup/page.tsx": "setup index",
+  "(app)/setup/cabinet-types/page.tsx": "cabinet types hold no matter or document (admins only)",
   "api/health/route.ts": "database and storage status only",
   "api/auth/me/route.ts": "the signed-in person only",
   "api/cabinet-types/route.ts": "cabinet types hold no matter or document",

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { forbidden } from "next/navigation";
 import { EventsTable } from "@/components/history/events-table";
 import { HistoryFilters, type HistoryQuery } from "@/components/history/history-filters";
+import { HistoryTabs } from "@/components/history/history-tabs";
 import { Pager } from "@/components/history/pager";
 import { Notice } from "@/components/ui/notice";
 import { requirePageUser } from "@/lib/data/current-user";
@@ -85,6 +86,7 @@ export default async function HistoryPage({ searchParams }: { searchParams: Prom
           never changed or removed. Times are in UTC.
         </p>
       </div>
+      <HistoryTabs active="/history" />
       <HistoryFilters query={query} exportHref={parsed.success ? exportHref : null} />
       {!parsed.success && (
         <Notice tone="error" title="These filters cannot be used">

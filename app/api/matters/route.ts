@@ -1,12 +1,27 @@
 import { NextResponse } from "next/server";
-import { handle } from "@/lib/http";
+import { z } from "zod";
+import { handle, readJson } from "@/lib/http";
 import { requireUser } from "@/lib/data/current-user";
-import { listVisibleMatters } from "@/lib/data/catalog";
+import { createMatter, listMatters } from "@/lib/data/setup-matters";
+import { matterSchema } from "@/lib/validations/setup";
 
 export const dynamic = "force-dynamic";
 
-export const GET = handle(async () => {
+const pageSchema = z.object({
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(1000).default(500),
+});
+
+/** The matters the wall lets this user see; teams only for admins. */
+export const GET = handle(async (request: Request) => {
   const user = await requireUser("documents.read", "see matters");
-  const items = (await listVisibleMatters(user)).map(({ id, number, title, clientName, status, restricted }) => ({ id, number, title, clientName, status, restricted }));
-  return NextResponse.json({ items, total: items.length, page: 1, pageSize: items.length });
+  const p = pageSchema.parse(Object.fromEntries(new URL(request.url).searchParams));
+  const { items, total } = await listMatters(user, p);
+  return NextResponse.json({ items, total, page: p.page, pageSize: p.pageSize });
+});
+
+export const POST = handle(async (request: Request) => {
+  const user = await requireUser("setup.manage", "add matters");
+  const input = matterSchema.parse(await readJson(request));
+  return NextResponse.json(await createMatter(user, input), { status: 201 });
 });

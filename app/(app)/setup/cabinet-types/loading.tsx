@@ -1,0 +1,5 @@
+import { SetupSkeleton } from "@/components/setup/table-skeleton";
+
+export default function Loading() {
+  return <SetupSkeleton title="Cabinet types" />;
+}
