@@ -3,6 +3,7 @@
 // the artifact in the bucket; promotes the candidate only if its macro-F1 is not more than one
 // point below the current model's settings on the same folds. A failed run leaves the current
 // model serving (promotion is the only step that changes which version is current).
+import { alertAdminsOfRetrain } from "@/lib/data/notices";
 import { getDb } from "@/db";
 import { enqueueJob } from "@/lib/data/jobs";
 import { withNamedLock } from "@/lib/data/locks";
@@ -141,6 +142,7 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}):
           reason: `Not promoted: macro-F1 ${report.macroF1.toFixed(3)} is more than one point below ${compared.toFixed(3)} for the current model on the same folds. The current model keeps serving.`,
         });
       }
+      await alertAdminsOfRetrain(versionId).catch((e) => console.error("[retrain] could not queue the admins' alert:", e));
     } catch (e) {
       await updateModelVersion(versionId, {
         status: "failed",
@@ -149,6 +151,7 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}):
         duration_ms: Date.now() - started,
         reason: `Training failed: ${e instanceof Error ? e.message : String(e)} The current model keeps serving.`.slice(0, 600),
       });
+      await alertAdminsOfRetrain(versionId).catch((err) => console.error("[retrain] could not queue the admins' alert:", err));
     }
     return true;
   });
