@@ -32,7 +32,7 @@ export function digestMail(to: string, name: string, f: DigestFigures, link: str
   const lowest = f.lowestConfidence === null ? "" : `\nLowest confidence: ${Math.round(f.lowestConfidence * 100)}%`;
   return {
     to,
-    subject: `${f.waiting} document${f.waiting === 1 ? "" : "s"} wait in To review`,
+    subject: `${f.waiting} document${f.waiting === 1 ? " waits" : "s wait"} in To review`,
     text: `Hello ${name},\n\n${f.waiting} document${f.waiting === 1 ? " waits" : "s wait"} in To review for you.\nOldest: waiting ${oldest} (since ${f.oldestSince.toISOString().slice(0, 16).replace("T", " ")} UTC)${lowest}\n\nOpen To review: ${link}\n\nYou get this digest on days when something waits. Switch it off on your profile page.\n`,
   };
 }
