@@ -42,15 +42,15 @@ export function InviteForm({ onInvited }: { onInvited: (p: PersonView) => void }
         void submit(e.currentTarget);
       }}
     >
-      <label className="text-sm">
+      <label className="min-w-0 max-w-full text-sm">
         <span className="mb-1 block font-medium">Name</span>
-        <input name="name" required maxLength={120} className={FIELD} data-testid="invite-name" />
+        <input name="name" required maxLength={120} className={`${FIELD} w-full sm:w-48`} data-testid="invite-name" />
       </label>
-      <label className="text-sm">
+      <label className="min-w-0 max-w-full text-sm">
         <span className="mb-1 block font-medium">E-mail</span>
-        <input name="email" type="email" required className={`${FIELD} w-64`} data-testid="invite-email" />
+        <input name="email" type="email" required className={`${FIELD} w-full sm:w-64`} data-testid="invite-email" />
       </label>
-      <label className="text-sm">
+      <label className="min-w-0 max-w-full text-sm">
         <span className="mb-1 block font-medium">Role</span>
         <select name="role" defaultValue="clerk" className={FIELD} data-testid="invite-role">
           {(Object.keys(ROLE_WORDS) as Role[]).map((r) => (

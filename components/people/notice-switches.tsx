@@ -38,7 +38,7 @@ export function NoticeSwitches({ initial, switches }: { initial: NoticeSettingsV
       <legend className="px-1 font-medium">E-mail notices</legend>
       {switches.map((s) => (
         <label key={s.key} className="flex items-start gap-2 text-sm">
-          <input type="checkbox" className="mt-1" checked={settings[s.key]} onChange={(e) => void toggle(s.key, e.target.checked)} data-testid={`notice-${s.key}`} />
+          <input type="checkbox" className="mt-1 accent-verdigris" checked={settings[s.key]} onChange={(e) => void toggle(s.key, e.target.checked)} data-testid={`notice-${s.key}`} />
           <span>
             <span className="font-medium">{s.label}</span>
             <span className="block text-ink-soft">{s.help}</span>

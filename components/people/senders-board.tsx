@@ -58,21 +58,21 @@ export function SendersBoard({ initial, uploaders }: { initial: SenderView[]; up
           void add(e.currentTarget);
         }}
       >
-        <label className="text-sm">
+        <label className="min-w-0 max-w-full text-sm">
           <span className="mb-1 block font-medium">Address or domain</span>
-          <input name="pattern" required placeholder="copier@alderquay.example" className={`${FIELD} w-64`} />
+          <input name="pattern" required placeholder="copier@alderquay.example" className={`${FIELD} w-full sm:w-64`} />
         </label>
-        <label className="text-sm">
+        <label className="min-w-0 max-w-full text-sm">
           <span className="mb-1 block font-medium">File as</span>
-          <select name="filesAs" required className={FIELD}>
+          <select name="filesAs" required className={`${FIELD} max-w-full`}>
             {uploaders.map((u) => (
               <option key={u.id} value={u.id}>{u.name} ({u.email})</option>
             ))}
           </select>
         </label>
-        <label className="text-sm">
+        <label className="min-w-0 max-w-full text-sm">
           <span className="mb-1 block font-medium">Note</span>
-          <input name="note" maxLength={200} className={`${FIELD} w-56`} />
+          <input name="note" maxLength={200} className={`${FIELD} w-full sm:w-56`} />
         </label>
         <Button type="submit">Allow</Button>
       </form>
