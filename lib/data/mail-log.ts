@@ -55,12 +55,13 @@ export async function completeMailJob(jobId: number, workerId: string, mailId: n
   });
 }
 
-/** An attempt failed: the row stays queued with the reason until the next attempt. */
-export async function noteMailAttemptFailed(id: number, error: string, finalAttempt: boolean): Promise<void> {
-  await getDb()("mail_log")
+/** An attempt failed: the row stays queued with the reason until the next attempt, or is failed for good. */
+export async function noteMailAttemptFailed(id: number, error: string, final: boolean, countAttempt = true): Promise<void> {
+  const db = getDb();
+  await db("mail_log")
     .where({ id })
     .whereNot("state", "sent")
-    .update({ state: finalAttempt ? "failed" : "queued", last_error: error.slice(0, 1000), attempts: getDb().raw("attempts + 1") });
+    .update({ state: final ? "failed" : "queued", last_error: error.slice(0, 1000), ...(countAttempt ? { attempts: db.raw("attempts + 1") } : {}) });
 }
 
 export interface OutboxRow {

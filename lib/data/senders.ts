@@ -1,7 +1,7 @@
 import "server-only";
 // Allowed senders of scans by e-mail (Setup › Allowed senders): addresses or whole domains, each
-// filed as a named person. Who a sender maps to: a sender whose address is itself an active
-// person's who may upload is that person; any other allowed sender's documents are recorded as
+// filed as a named person. Who a sender maps to: a sender whose address is a person's is that
+// person (refused when deactivated or when their role may not upload); any other allowed sender's documents are recorded as
 // uploaded by the entry's person (e.g. the clerk who looks after the copier), through e-mail, with
 // the sender's address on the message record and in the receipt.
 import { getDb } from "@/db";
@@ -69,7 +69,13 @@ export async function decideSender(addressInput: string): Promise<SenderDecision
     return { ok: false, message: `${address || "This sender"} may not send scans to this office. Ask its Foldwright admin to add the address or domain under Setup, Allowed senders.` };
   }
   const self = await getDb()("users").where({ email: address }).first("id");
-  const uploader = (self && (await uploaderById(self.id))) || (await uploaderById(entry.files_as_user_id));
+  if (self) {
+    // A person's own address speaks for that person: deactivated, or a role that may not upload, is refused.
+    const person = await uploaderById(self.id);
+    if (person) return { ok: true, uploader: person, entry: entry.pattern };
+    return { ok: false, message: `The Foldwright account of ${address} is not active or its role may not upload documents, so its scans are not taken. Ask the office's Foldwright admin.` };
+  }
+  const uploader = await uploaderById(entry.files_as_user_id);
   if (!uploader) {
     return { ok: false, message: `Scans from ${address} are filed as a person who can no longer upload. Ask the office's Foldwright admin to update the allowed sender ${entry.pattern}.` };
   }

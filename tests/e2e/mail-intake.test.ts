@@ -104,7 +104,14 @@ describe("scans by e-mail", () => {
     expect(bare.responseCode).toBe(554);
     expect(bare.response).toMatch(/5\.6\.0 This message has no attachment/);
 
-    const kept = await owner("mail_intake_messages").whereIn("envelope_from", ["someone@elsewhere.example", `big-${stamp}@alderquay.example`, `bare-${stamp}@alderquay.example`]).count({ n: "id" });
+    // A sender who is a person speaks for that person: a deactivated account is refused.
+    const leaver = `leaver-${stamp}@alderquay.example`;
+    await owner("users").insert({ email: leaver, name: "Former Clerk", role: "clerk", password_hash: "x", active: false });
+    const gone = await transport.sendMail({ from: leaver, to: env.mail.intakeAddress, subject: "x", attachments: [{ filename: "a.pdf", content: pdf }] }).catch(refusal);
+    expect(gone.responseCode).toBe(550);
+    expect(gone.response).toMatch(/5\.7\.1 The Foldwright account of .+ is not active/);
+
+    const kept = await owner("mail_intake_messages").whereIn("envelope_from", ["someone@elsewhere.example", `big-${stamp}@alderquay.example`, `bare-${stamp}@alderquay.example`, leaver]).count({ n: "id" });
     expect(Number(kept[0].n)).toBe(0);
   });
 });

@@ -8,6 +8,7 @@ import { queueMail } from "@/lib/data/mail-log";
 import { makeMailJob } from "@/lib/jobs/mail-job";
 import { MAIL_JOB } from "@/lib/jobs/kinds";
 import { startWorkers } from "@/lib/jobs/worker";
+import { SMTPServer } from "smtp-server";
 import { startMailCatcher } from "@/lib/mail/catcher";
 import { listCaught } from "@/lib/mail/caught";
 import { createMailTransport } from "@/lib/mail/transport";
@@ -68,6 +69,33 @@ describe("the mail queue", () => {
     } finally {
       await workers.stop();
       await catcher?.stop();
+    }
+  });
+
+  it("marks a message the server refuses for good (a 5yz reply) failed at once, with the reason", async () => {
+    // RFC 5321 §4.2.1: 5yz is a permanent negative reply; retrying the same message cannot succeed.
+    const port = await freePort();
+    const refusing = new SMTPServer({
+      authOptional: true,
+      disabledCommands: ["STARTTLS"],
+      logger: false,
+      onRcptTo: (_a, _s, cb) => cb(Object.assign(new Error("No such mailbox here"), { responseCode: 550 })),
+    });
+    await new Promise<void>((r) => refusing.listen(port, "127.0.0.1", () => r()));
+    await owner("jobs").where({ kind: MAIL_JOB }).whereIn("status", ["queued", "running"]).update({ status: "done" });
+    const mailId = await queueMail(getDb(), { kind: "digest", mail: { to: `gone-${Date.now()}@example.com`, subject: "Refused", text: "x" } });
+    const handler = makeMailJob(() => createMailTransport({ host: "127.0.0.1", port, secure: false, user: "", password: "" }));
+    const workers = startWorkers({ handlers: { [MAIL_JOB]: handler }, concurrency: 1, pollMs: 100, leaseSeconds: 30, log: () => {} });
+    try {
+      await expect.poll(async () => (await owner("mail_log").where({ id: mailId }).first("state")).state, { timeout: 20_000 }).toBe("failed");
+      const row = await owner("mail_log").where({ id: mailId }).first("attempts", "last_error");
+      expect(row.attempts).toBe(1);
+      expect(row.last_error).toMatch(/^The mail server refused this message: .*550/);
+      const job = await owner("jobs").where({ kind: MAIL_JOB }).whereRaw("JSON_EXTRACT(payload, '$.mailId') = ?", [mailId]).first("status");
+      expect(job.status).toBe("done"); // not tried again
+    } finally {
+      await workers.stop();
+      await new Promise<void>((r) => refusing.close(() => r()));
     }
   });
 });

@@ -19,8 +19,8 @@ export default async function SendersPage() {
         <h1 className="font-serif text-2xl">Allowed senders</h1>
         <p className="mt-1 max-w-3xl text-sm text-ink-soft">
           Copiers and people who may e-mail scans to <span className="font-mono">{env.mail.intakeAddress}</span>. Each attachment becomes a document
-          exactly as if dropped at Intake, and the sender gets a receipt. A sender whose address is a person who may upload files as that
-          person; any other allowed sender files as the person chosen here. Mail from anyone else is refused.
+          exactly as if dropped at Intake, and the sender gets a receipt. A sender whose address is a person&apos;s files as that person (refused when
+          the account is deactivated or its role may not upload); any other allowed sender files as the person chosen here. Mail from anyone else is refused.
         </p>
         <p className="mt-2 max-w-3xl text-xs text-ink-faint">
           A sender&apos;s address can be forged. Let only your own mail server (which checks the sending domain) pass mail to Foldwright&apos;s intake port.
