@@ -20,6 +20,12 @@ function int(name: string, fallback: number): number {
   return value;
 }
 
+function hour(name: string, fallback: number): number {
+  const value = int(name, fallback);
+  if (value > 23) throw new Error(`${name} is an hour of the day from 0 to 23, got ${value}. Fix it in the environment and start again.`);
+  return value;
+}
+
 function bool(name: string, fallback: boolean): boolean {
   const raw = process.env[name];
   if (raw === undefined || raw === "") return fallback;
@@ -104,7 +110,7 @@ export const env = {
     // 35 MB: most mail services cap attachments near 25 MB, which base64 makes ≈ 34 MB (from memory).
     intakeMaxBytes: int("MAIL_INTAKE_MAX_BYTES", 35 * 1024 * 1024),
     /** Hour (0–23, OFFICE_TIME_ZONE) of the daily To review digest. */
-    digestHour: int("DIGEST_HOUR", 8),
+    digestHour: hour("DIGEST_HOUR", 8),
   },
   jobs: {
     /** Run background workers inside this process (off for a web-only instance). */

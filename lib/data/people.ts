@@ -34,9 +34,11 @@ function stateOf(row: { active: number | boolean; password_hash: string | null }
 
 const iso = (d: Date | string | null) => (d ? new Date(d).toISOString() : null);
 
-export async function listPeople(): Promise<Person[]> {
+export async function listPeople(onlyId?: number): Promise<Person[]> {
   const db = getDb();
-  const rows = await db("users as u")
+  const q = db("users as u");
+  if (onlyId !== undefined) q.where("u.id", onlyId);
+  const rows = await q
     .select("u.id", "u.email", "u.name", "u.role", "u.active", "u.password_hash", "u.last_sign_in_at", "u.invited_at")
     .select(
       db("account_tokens as t")
@@ -94,7 +96,7 @@ export async function resendInvitation(admin: CurrentUser, id: number): Promise<
 }
 
 export async function findPerson(id: number): Promise<Person> {
-  const person = (await listPeople()).find((p) => p.id === id);
+  const [person] = await listPeople(id);
   if (!person) throw new AppError(404, "not_found", "That person was not found. Reload the list of people.");
   return person;
 }
