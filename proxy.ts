@@ -5,7 +5,8 @@ import { getIronSession } from "iron-session";
 import { NextResponse, type NextRequest } from "next/server";
 import { isSessionLive, sessionOptions, type SessionData } from "@/lib/auth/session";
 
-const PUBLIC = ["/sign-in", "/api/", "/_next/", "/favicon"];
+// Invitation and reset links are opened signed out; the one-time token is their credential.
+const PUBLIC = ["/sign-in", "/forgot-password", "/invite/", "/reset-password/", "/api/", "/_next/", "/favicon"];
 
 export async function proxy(request: NextRequest) {
   const response = NextResponse.next();

@@ -20,17 +20,29 @@ function int(name: string, fallback: number): number {
   return value;
 }
 
+function hour(name: string, fallback: number): number {
+  const value = int(name, fallback);
+  if (value > 23) throw new Error(`${name} is an hour of the day from 0 to 23, got ${value}. Fix it in the environment and start again.`);
+  return value;
+}
+
 function bool(name: string, fallback: boolean): boolean {
   const raw = process.env[name];
   if (raw === undefined || raw === "") return fallback;
   return ["1", "true", "yes", "on"].includes(raw.toLowerCase());
 }
 
+const port = int("PORT", 3000);
+const catcherPort = int("MAIL_CATCHER_PORT", 1025);
+const dataDir = text("FOLDWRIGHT_DATA_DIR", path.join(root, ".data"));
+
 export const env = {
   root,
   production: process.env.NODE_ENV === "production",
-  port: int("PORT", 3000),
-  dataDir: text("FOLDWRIGHT_DATA_DIR", path.join(root, ".data")),
+  port,
+  /** Where people reach the app: the base of links sent by e-mail (invitations, resets). */
+  origin: text("APP_ORIGIN", `http://127.0.0.1:${port}`).replace(/\/+$/, ""),
+  dataDir,
   db: {
     host: text("DATABASE_HOST", "127.0.0.1"),
     port: int("DATABASE_PORT", 33306),
@@ -77,6 +89,29 @@ export const env = {
     cron: text("RETRAIN_CRON", "0 2 * * *"),
     timeZone: text("OFFICE_TIME_ZONE", "UTC"),
   },
+  mail: {
+    /** Outgoing SMTP; by default the local mail catcher. Any hosted provider works by configuration. */
+    host: text("MAIL_HOST", "127.0.0.1"),
+    port: int("MAIL_PORT", catcherPort),
+    secure: bool("MAIL_SECURE", false), // TLS from the first byte (port 465); STARTTLS is used when offered otherwise
+    user: text("MAIL_USER", ""),
+    password: text("MAIL_PASSWORD", ""),
+    from: text("MAIL_FROM", "Foldwright <foldwright@alderquay.example>"),
+    /** Sending attempts before a message is marked failed; backoff is capped by JOBS_RETRY_MAX_SECONDS. */
+    maxAttempts: int("MAIL_MAX_ATTEMPTS", 100),
+    /** The local catcher: an SMTP server on 127.0.0.1 that writes each message to catcherDir as .eml. */
+    catcherPort,
+    catcherDir: text("MAIL_CATCHER_DIR", path.join(dataDir, "mail")),
+    startCatcher: bool("MAIL_START_CATCHER", true),
+    /** Scans by e-mail: the SMTP listener on 127.0.0.1 for the office's intake address. */
+    intakeEnabled: bool("MAIL_INTAKE_ENABLED", true),
+    intakePort: int("MAIL_INTAKE_PORT", 2525),
+    intakeAddress: text("INTAKE_ADDRESS", "intake@alderquay.example").toLowerCase(),
+    // 35 MB: most mail services cap attachments near 25 MB, which base64 makes ≈ 34 MB (from memory).
+    intakeMaxBytes: int("MAIL_INTAKE_MAX_BYTES", 35 * 1024 * 1024),
+    /** Hour (0–23, OFFICE_TIME_ZONE) of the daily To review digest. */
+    digestHour: hour("DIGEST_HOUR", 8),
+  },
   jobs: {
     /** Run background workers inside this process (off for a web-only instance). */
     enabled: bool("JOBS_ENABLED", true),
@@ -85,6 +120,8 @@ export const env = {
     leaseSeconds: int("JOBS_LEASE_SECONDS", 300),
     maxAttempts: int("JOBS_MAX_ATTEMPTS", 5),
     retryBaseSeconds: int("JOBS_RETRY_BASE_SECONDS", 5),
+    /** The longest wait between two attempts of a job (a mail server down for hours is retried every 15 minutes). */
+    retryMaxSeconds: int("JOBS_RETRY_MAX_SECONDS", 900),
   },
 };
 

@@ -9,6 +9,8 @@ export const TEST_ENV: Record<string, string> = {
   SIGN_IN_MAX_FAILURES: "3",
   UPLOAD_MAX_BYTES: String(2 * 1024 * 1024),
   JOBS_POLL_MS: "250",
+  // Scans by e-mail: a small limit so the oversize refusal needs only a few megabytes.
+  MAIL_INTAKE_MAX_BYTES: String(3 * 1024 * 1024),
   SEED_DEMO_DOCUMENTS: "false",
   NEXT_TELEMETRY_DISABLED: "1",
   AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",

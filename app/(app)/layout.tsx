@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { Rail } from "@/components/shell/rail";
 import { areasFor } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/data/current-user";
@@ -14,7 +15,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
         <p className="mb-5 px-3 font-serif text-xl">Foldwright</p>
         <Rail items={items} />
         <div className="mt-auto border-t border-paper-edge px-3 pt-3 text-xs text-ink-soft">
-          <p className="font-medium text-ink" data-testid="current-user">{user.name}</p>
+          <Link href="/profile" className="font-medium text-ink hover:underline" data-testid="current-user" title="Your profile and notices">{user.name}</Link>
           <p>
             <span data-testid="current-role">{ROLE_NAMES[user.role]}</span> · {user.email}
           </p>

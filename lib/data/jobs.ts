@@ -21,12 +21,13 @@ export async function enqueueJob(
   documentId: number | null,
   payload: unknown = null,
   trx: Knex | Knex.Transaction = getDb(),
+  options: { maxAttempts?: number } = {},
 ): Promise<number> {
   const [id] = await trx("jobs").insert({
     kind,
     document_id: documentId,
     payload: payload === null ? null : JSON.stringify(payload),
-    max_attempts: env.jobs.maxAttempts,
+    max_attempts: options.maxAttempts ?? env.jobs.maxAttempts,
   });
   return id;
 }
@@ -84,7 +85,7 @@ export async function completeJob(trx: Knex.Transaction, id: number, workerId: s
 /** Retries with exponential backoff, or gives up after max_attempts. Returns true when given up. */
 export async function failJob(job: Job, workerId: string, error: string): Promise<boolean> {
   const giveUp = job.attempts >= job.max_attempts;
-  const delay = env.jobs.retryBaseSeconds * 2 ** (job.attempts - 1);
+  const delay = Math.min(env.jobs.retryMaxSeconds, env.jobs.retryBaseSeconds * 2 ** Math.min(job.attempts - 1, 30));
   await getDb()("jobs")
     .where({ id: job.id, leased_by: workerId })
     .update({

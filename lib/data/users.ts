@@ -38,7 +38,7 @@ export async function checkCredentials(emailInput: string, password: string): Pr
   const db = getDb();
   const email = emailInput.trim().toLowerCase();
   const row = await db("users").where({ email }).first();
-  if (!row || !row.active) {
+  if (!row || !row.active || !row.password_hash) {
     await burnPasswordCheck(password);
     return { ok: false, code: "wrong_credentials", message: WRONG };
   }

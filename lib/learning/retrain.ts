@@ -3,6 +3,7 @@
 // the artifact in the bucket; promotes the candidate only if its macro-F1 is not more than one
 // point below the current model's settings on the same folds. A failed run leaves the current
 // model serving (promotion is the only step that changes which version is current).
+import { alertAdminsOfRetrain } from "@/lib/data/notices";
 import { withNamedLock } from "@/lib/data/locks";
 import {
   createTrainingVersion,
@@ -129,11 +130,13 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}, 
             ? { promote: `Promoted: macro-F1 ${report.macroF1.toFixed(3)} against ${compared.toFixed(3)} for the current model's settings on the same folds.` }
             : { reject: `Not promoted: macro-F1 ${report.macroF1.toFixed(3)} is more than one point below ${compared.toFixed(3)} for the current model on the same folds. The current model keeps serving.` };
       await finishTrainingRun(versionId, fields, outcome, completeJob);
+      if ("reject" in outcome) await alertAdminsOfRetrain(versionId).catch((err) => console.error("[retrain] could not queue the admins' alert:", err));
     } catch (e) {
       if (e instanceof LeaseLostError) throw e; // another worker owns the run now: write nothing
       const fields = { finished_at: new Date(), duration_ms: Date.now() - started };
       const fail = `Training failed: ${e instanceof Error ? e.message : String(e)} The current model keeps serving.`;
       await finishTrainingRun(versionId, fields, { fail }, completeJob);
+      await alertAdminsOfRetrain(versionId).catch((err) => console.error("[retrain] could not queue the admins' alert:", err));
     }
     return true;
   });

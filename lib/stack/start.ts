@@ -36,12 +36,13 @@ async function queueSuggestions(): Promise<void> {
 
 async function main(): Promise<void> {
   const t0 = Date.now();
-  console.log("Starting MariaDB and the S3 fake on 127.0.0.1 …");
+  console.log("Starting MariaDB, the S3 fake and the mail catcher on 127.0.0.1 …");
   const services = await startServices();
   const stopServices = () => services.stop();
   process.once("SIGINT", () => void stopServices().then(() => process.exit(130)));
   console.log(`  MariaDB ${services.database.startedHere ? "started" : "already running"} on 127.0.0.1:${env.db.port}`);
   console.log(`  S3 fake ${services.storage.startedHere ? "started" : "already running"} at ${env.s3.endpoint}`);
+  if (services.mail) console.log(`  Mail catcher ${services.mail.startedHere ? "started" : "already running"} on 127.0.0.1:${env.mail.catcherPort} (messages in ${services.mail.dir})`);
   await migrateDatabase();
   await seedDatabase();
   console.log(`  Database "${env.db.name}" migrated and seeded with the demo office.`);
@@ -59,6 +60,7 @@ async function main(): Promise<void> {
   console.log(`\nFoldwright is ready at ${server.url}/sign-in  (${((Date.now() - t0) / 1000).toFixed(1)} s)`);
   console.log(`Demo sign-ins (password "${env.demoPassword}"):`);
   for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(8)} ${u.email}`);
+  if (env.mail.intakeEnabled) console.log(`Scans by e-mail: send to ${env.mail.intakeAddress} through SMTP on 127.0.0.1:${env.mail.intakePort} (allowed senders: Setup › Allowed senders).`);
   console.log("Press Ctrl-C to stop.");
 
   let stopping = false;

@@ -1,8 +1,8 @@
 // A tiny HTTP client for the app under test that keeps one session cookie, like a browser.
 import { TEST_ENV } from "../test-env";
 
-// A worktree with ports of its own sets PORT; applyTestEnv keeps it, so the app is served there.
-export const BASE_URL = `http://127.0.0.1:${process.env.PORT || TEST_ENV.PORT}`;
+// The app the e2e setup serves: PORT when the environment sets it (each checkout's own), else the test port.
+export const BASE_URL = process.env.FOLDWRIGHT_TEST_URL ?? `http://127.0.0.1:${process.env.PORT || TEST_ENV.PORT}`;
 export const DEMO_PASSWORD = process.env.DEMO_PASSWORD || "foldwright-demo";
 
 export class Client {

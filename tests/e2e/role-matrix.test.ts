@@ -79,6 +79,28 @@ const MATRIX: Row[] = [
   { method: "GET", path: "/setup/cabinet-types", file: "(app)/setup/cabinet-types/page.tsx", expect: page(["admin"]) },
   { method: "GET", path: "/setup/matters", file: "(app)/setup/matters/page.tsx", expect: page(["admin"]) },
   { method: "GET", path: "/history/setup", file: "(app)/history/setup/page.tsx", expect: page(["admin", "auditor"]) },
+  // People and e-mail (issue 10). Admin-only setup routes answer 404 / 422 for an unknown id or an empty body.
+  { method: "GET", path: "/api/users", file: "api/users/route.ts", expect: { ...all(403, 401), admin: 200 } },
+  { method: "POST", path: "/api/users", file: "api/users/route.ts", body: {}, expect: { ...all(403, 401), admin: 422 } },
+  { method: "PATCH", path: "/api/users/999999", file: "api/users/[id]/route.ts", body: { role: "clerk" }, expect: { ...all(403, 401), admin: 404 } },
+  { method: "POST", path: "/api/users/999999/invitation", file: "api/users/[id]/invitation/route.ts", expect: { ...all(403, 401), admin: 404 } },
+  // Public on purpose: the one-time link is the credential (an unknown one is a 404 for anyone).
+  { method: "POST", path: "/api/auth/accept-invitation", file: "api/auth/accept-invitation/route.ts", body: { token: "x".repeat(40), password: "x" }, expect: all(404, 404) },
+  { method: "POST", path: "/api/auth/reset-password", file: "api/auth/reset-password/route.ts", body: { token: "x".repeat(40), password: "x" }, expect: all(404, 404) },
+  { method: "POST", path: "/api/auth/forgot-password", file: "api/auth/forgot-password/route.ts", body: { email: "nobody@example.com" }, expect: all(202, 202) },
+  { method: "GET", path: "/api/profile/notices", file: "api/profile/notices/route.ts", expect: all(200, 401) },
+  { method: "PATCH", path: "/api/profile/notices", file: "api/profile/notices/route.ts", body: {}, expect: all(422, 401) },
+  { method: "GET", path: "/api/senders", file: "api/senders/route.ts", expect: { ...all(403, 401), admin: 200 } },
+  { method: "POST", path: "/api/senders", file: "api/senders/route.ts", body: {}, expect: { ...all(403, 401), admin: 422 } },
+  { method: "DELETE", path: "/api/senders/999999", file: "api/senders/[id]/route.ts", expect: { ...all(403, 401), admin: 404 } },
+  { method: "GET", path: "/api/outbox", file: "api/outbox/route.ts", expect: { ...all(403, 401), admin: 200 } },
+  { method: "GET", path: "/setup/people", file: "(app)/setup/people/page.tsx", expect: page(["admin"]) },
+  { method: "GET", path: "/setup/senders", file: "(app)/setup/senders/page.tsx", expect: page(["admin"]) },
+  { method: "GET", path: "/setup/outbox", file: "(app)/setup/outbox/page.tsx", expect: page(["admin"]) },
+  { method: "GET", path: "/profile", file: "(app)/profile/page.tsx", expect: page(["clerk", "partner", "admin", "auditor"]) },
+  { method: "GET", path: "/forgot-password", file: "(auth)/forgot-password/page.tsx", expect: all(200, 200) },
+  { method: "GET", path: "/invite/not-a-real-token-0000000000000000", file: "(auth)/invite/[token]/page.tsx", expect: all(200, 200) },
+  { method: "GET", path: "/reset-password/not-a-real-token-0000000000000000", file: "(auth)/reset-password/[token]/page.tsx", expect: all(200, 200) },
 ];
 
 const clients = {} as Record<Who, Client>;

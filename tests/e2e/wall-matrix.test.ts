@@ -96,6 +96,17 @@ const EXEMPT: Record<string, string> = {
   "api/cabinet-types/route.ts": "cabinet types hold no matter or document",
   "api/models/route.ts": "office-wide model figures per cabinet type",
   "api/settings/route.ts": "the auto-file policy",
+  "api/users/route.ts": "people and roles (admins only)",
+  "api/profile/notices/route.ts": "the signed-in person's own notice switches",
+  "api/senders/route.ts": "allowed e-mail senders (admins only)",
+  "api/outbox/route.ts": "mail sent, for admins only, who are inside every wall",
+  "(app)/setup/people/page.tsx": "people and roles (admins only)",
+  "(app)/setup/senders/page.tsx": "allowed e-mail senders (admins only)",
+  "(app)/setup/outbox/page.tsx": "mail sent, for admins only, who are inside every wall",
+  "(app)/profile/page.tsx": "the signed-in person's own settings",
+  "(auth)/forgot-password/page.tsx": "public form",
+  "(auth)/invite/[token]/page.tsx": "public form behind a one-time link",
+  "(auth)/reset-password/[token]/page.tsx": "public form behind a one-time link",
 };
 
 /** Anything in a text answer that gives the document or the restricted matter away. */

@@ -1,0 +1,11 @@
+import { NextResponse } from "next/server";
+import { handle, readJson } from "@/lib/http";
+import { acceptInvitation } from "@/lib/data/passwords";
+import { tokenPasswordSchema } from "@/lib/validations/people";
+
+// Public on purpose: the one-time link is the credential. Not rate-limited yet (see README).
+export const POST = handle(async (request: Request) => {
+  const { token, password } = tokenPasswordSchema.parse(await readJson(request));
+  const { email } = await acceptInvitation(token, password);
+  return NextResponse.json({ email, message: "Your password is set. Sign in with your e-mail address and the new password." });
+});
