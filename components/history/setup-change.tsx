@@ -26,7 +26,10 @@ const LABELS: Record<string, string> = {
 /** Ids travel with names in the record; the names are what a reader wants. */
 const HIDDEN = new Set(["clientId", "memberId", "mergedIntoId"]);
 
-function show(v: unknown): string {
+const TRIGGERS: Record<string, string> = { after_filing: "after filing", after_matter_close: "after the matter closes", permanent: "permanent" };
+
+function show(v: unknown, key = ""): string {
+  if (key === "retentionTrigger" && typeof v === "string") return TRIGGERS[v] ?? v;
   if (v === null || v === undefined || v === "") return "–";
   if (Array.isArray(v)) return v.length ? v.join(", ") : "none";
   if (typeof v === "boolean") return v ? "yes" : "no";
@@ -45,9 +48,9 @@ export function SetupChange({ before, after }: { before: Record<string, unknown>
           <div key={k} className="flex gap-1">
             <dt className="shrink-0 text-ink-faint">{LABELS[k] ?? k}:</dt>
             <dd className="min-w-0 break-words">
-              {before === null || same || b === undefined ? show(a) : after === null || a === undefined ? show(b) : (
+              {before === null || same || b === undefined ? show(a, k) : after === null || a === undefined ? show(b, k) : (
                 <>
-                  <span className="text-ink-soft line-through decoration-ink-faint/60">{show(b)}</span> → {show(a)}
+                  <span className="text-ink-soft line-through decoration-ink-faint/60">{show(b, k)}</span> → {show(a, k)}
                 </>
               )}
             </dd>

@@ -54,7 +54,7 @@ export function CabinetTypesTable({ rows, activeTypes, params, sort, dir, minExa
                 <td className={cn(TD, "hidden max-w-52 text-xs lg:table-cell")}>{t.keywords.join(", ") || <span className="text-ink-faint">none</span>}</td>
                 <td className={cn(TD, "whitespace-nowrap text-xs")}>{retentionWords(t.retentionYears, t.retentionTrigger)}</td>
                 <td className={cn(TD, "text-right font-mono text-xs")}>{t.filedCount}</td>
-                <td className={cn(TD, "max-w-56 text-xs", status.tone === "cold" && "text-amber")} data-testid="learning-status">
+                <td className={cn(TD, "min-w-40 max-w-56 text-xs", status.tone === "cold" && "text-amber")} data-testid="learning-status">
                   {status.text}
                 </td>
                 <td className={cn(TD, "whitespace-nowrap text-right")}>

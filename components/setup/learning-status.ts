@@ -18,9 +18,9 @@ export function learningStatus({ active, humanFiledCount, learned, minExamples }
   if (!active) return { tone: "retired", text: "Retired: never suggested", needed: Number.MAX_SAFE_INTEGER };
   const needed = Math.max(0, minExamples - humanFiledCount);
   if (needed > 0) {
-    return { tone: "cold", text: `Ranks by its description; needs ${needed} more filed example${needed === 1 ? "" : "s"} before the model learns it`, needed };
+    return { tone: "cold", text: `Needs ${needed} more filed example${needed === 1 ? "" : "s"}; ranks by its description until then`, needed };
   }
-  if (!learned) return { tone: "cold", text: "Enough filed examples: the model learns it at the next retrain", needed: 0 };
+  if (!learned) return { tone: "cold", text: "Enough examples: learned at the next retrain", needed: 0 };
   return { tone: "ok", text: `Learned by the model (${humanFiledCount} filed example${humanFiledCount === 1 ? "" : "s"})`, needed: 0 };
 }
 

@@ -147,12 +147,18 @@ async function writeTeamChanges(trx: Knex.Transaction, user: CurrentUser, matter
   const added = after.filter((p) => !had.has(p.id));
   if (removed.length) await trx("matter_members").where({ matter_id: matter.id }).whereIn("user_id", removed.map((p) => p.id)).delete();
   if (added.length) await trx("matter_members").insert(added.map((p) => ({ matter_id: matter.id, user_id: p.id })));
-  const names = (team: TeamMember[]) => team.map((p) => p.name);
+  // Each event's before → after is one step, so a reader sees the team as it was after each change.
+  let team = before;
+  const names = (t: TeamMember[]) => t.map((p) => p.name);
   for (const p of removed) {
-    await appendSetupEvent(trx, { userId: user.id, entity: "team", entityId: matter.id, action: "member_removed", before: { matter: matter.number, member: p.name, memberId: p.id, team: names(before) }, after: { matter: matter.number, team: names(after) } });
+    const next = team.filter((m) => m.id !== p.id);
+    await appendSetupEvent(trx, { userId: user.id, entity: "team", entityId: matter.id, action: "member_removed", before: { matter: matter.number, member: p.name, memberId: p.id, team: names(team) }, after: { matter: matter.number, team: names(next) } });
+    team = next;
   }
   for (const p of added) {
-    await appendSetupEvent(trx, { userId: user.id, entity: "team", entityId: matter.id, action: "member_added", before: { matter: matter.number, team: names(before) }, after: { matter: matter.number, member: p.name, memberId: p.id, team: names(after) } });
+    const next = [...team, p];
+    await appendSetupEvent(trx, { userId: user.id, entity: "team", entityId: matter.id, action: "member_added", before: { matter: matter.number, team: names(team) }, after: { matter: matter.number, member: p.name, memberId: p.id, team: names(next) } });
+    team = next;
   }
 }
 

@@ -151,6 +151,12 @@ export const setupEventsQuerySchema = z.object({
   pageSize: z.coerce.number().int().min(1).max(10_000).default(100),
 });
 
+/** `page` and `pageSize` of the clients and matters lists (DESIGN §10). */
+export const pageSchema = z.object({
+  page: z.coerce.number().int().min(1, "page must be 1 or more.").default(1),
+  pageSize: z.coerce.number().int().min(1).max(1000, "pageSize must be at most 1000.").default(500),
+});
+
 /** `?all=1` on the lists: include retired types / every matter. */
 export const listFlagSchema = z.object({ all: z.enum(["0", "1"]).optional() });
 

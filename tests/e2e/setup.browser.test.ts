@@ -67,7 +67,7 @@ describe("Setup in a browser", () => {
     await page.getByTestId("save-cabinet-type").click();
     const typeRow = page.locator(`[data-testid="cabinet-type-row"][data-name="${typeName}"]`);
     await typeRow.waitFor();
-    expect(await typeRow.getByTestId("learning-status").textContent()).toMatch(/needs \d+ more filed examples/);
+    expect(await typeRow.getByTestId("learning-status").textContent()).toMatch(/Needs \d+ more filed examples/);
     await page.setViewportSize({ width: 760, height: 900 });
     await page.screenshot({ path: "/tmp/foldwright-setup-types-narrow.png", fullPage: true }); // looked at by hand, not compared
     await page.setViewportSize({ width: 1280, height: 900 });

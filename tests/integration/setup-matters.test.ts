@@ -91,6 +91,8 @@ describe("matters and teams", () => {
     expect(await canSeeMatter(who.partner, m.id)).toBe(true);
     const events = await owner("setup_events").whereIn("entity", ["matter", "team"]).where({ entity_id: m.id }).orderBy("id").select("entity", "action", "after");
     expect(events.map((e) => `${e.entity}:${e.action}`)).toEqual(["matter:created", "team:member_added", "team:member_added", "matter:restricted", "team:member_removed"]);
+    // One step per event: the team as it stood after each change.
+    expect(events.slice(1, 3).map((e) => e.after.team.length)).toEqual([1, 2]);
     expect(events[4].after.team).toEqual([who.partner.name]);
   });
 

@@ -1,16 +1,10 @@
 import { NextResponse } from "next/server";
-import { z } from "zod";
 import { handle, readJson } from "@/lib/http";
 import { requireUser } from "@/lib/data/current-user";
 import { createMatter, listMatters } from "@/lib/data/setup-matters";
-import { matterSchema } from "@/lib/validations/setup";
+import { matterSchema, pageSchema } from "@/lib/validations/setup";
 
 export const dynamic = "force-dynamic";
-
-const pageSchema = z.object({
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(1000).default(500),
-});
 
 /** The matters the wall lets this user see; teams only for admins. */
 export const GET = handle(async (request: Request) => {

@@ -25,8 +25,8 @@ describe("Setup tables' URL state", () => {
 
 describe("what the screen says about learning a type", () => {
   it("counts the filed examples still needed, then waits for a retrain, then says learned", () => {
-    expect(learningStatus({ active: true, humanFiledCount: 2, learned: false, minExamples: 5 }).text).toBe("Ranks by its description; needs 3 more filed examples before the model learns it");
-    expect(learningStatus({ active: true, humanFiledCount: 4, learned: false, minExamples: 5 }).text).toMatch(/needs 1 more filed example before/);
+    expect(learningStatus({ active: true, humanFiledCount: 2, learned: false, minExamples: 5 }).text).toBe("Needs 3 more filed examples; ranks by its description until then");
+    expect(learningStatus({ active: true, humanFiledCount: 4, learned: false, minExamples: 5 }).text).toMatch(/^Needs 1 more filed example;/);
     expect(learningStatus({ active: true, humanFiledCount: 5, learned: false, minExamples: 5 }).text).toMatch(/next retrain/);
     expect(learningStatus({ active: true, humanFiledCount: 9, learned: true, minExamples: 5 }).text).toBe("Learned by the model (9 filed examples)");
     expect(learningStatus({ active: false, humanFiledCount: 9, learned: true, minExamples: 5 }).tone).toBe("retired");
