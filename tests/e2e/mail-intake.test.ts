@@ -47,7 +47,7 @@ describe("scans by e-mail", () => {
     await expect
       .poll(
         async () => {
-          const queue = await (await clerk.request("GET", "/api/review?pageSize=200")).json();
+          const queue = await (await clerk.request("GET", "/api/review?pageSize=200&sort=age&dir=desc")).json();
           return names.filter((n) => queue.items.some((d: { name: string }) => d.name === n)).length;
         },
         { timeout: 90_000, interval: 500 },
