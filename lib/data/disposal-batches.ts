@@ -134,7 +134,7 @@ export async function getBatch(user: CurrentUser, id: number, db: Db = getDb()):
 }
 
 /** Why this user may not approve the batch, or null when they may (the two-person rule first). */
-export async function whyNotApprover(db: Db, user: CurrentUser, batch: { proposedById: number; matters: { id: number; number: string }[]; items: { matter: string | null }[] }): Promise<string | null> {
+export async function whyNotApprover(user: CurrentUser, batch: { proposedById: number; matters: { id: number; number: string }[]; items: { matter: string | null }[] }, db: Db = getDb()): Promise<string | null> {
   if (batch.proposedById === user.id) {
     return "You proposed this batch, so you cannot approve it: a partner on each matter involved, or another admin, must approve it. Nothing was destroyed.";
   }
@@ -145,4 +145,15 @@ export async function whyNotApprover(db: Db, user: CurrentUser, batch: { propose
   const notOn = batch.matters.filter((m) => !mine.has(m.id)).map((m) => m.number);
   if (notOn.length) return `You are not on matter ${notOn.join(", ")}, so you cannot approve this batch. A partner on every matter involved, or an admin other than the proposer, must approve it.`;
   return null;
+}
+
+/** The batch that destroyed this document (the caller has checked the user may see the document). */
+export async function findDisposalOf(documentId: number): Promise<{ batchId: number; proposedBy: string; approvedBy: string | null } | null> {
+  const r = await getDb()("documents as d")
+    .join("disposal_batches as b", "b.id", "d.disposal_batch_id")
+    .join("users as pu", "pu.id", "b.proposed_by")
+    .leftJoin("users as du", "du.id", "b.decided_by")
+    .where("d.id", documentId)
+    .first("b.id", "pu.name as proposer", "du.name as approver");
+  return r ? { batchId: Number(r.id), proposedBy: String(r.proposer), approvedBy: (r.approver as string | null) ?? null } : null;
 }

@@ -43,7 +43,7 @@ export async function approveBatch(user: CurrentUser, batchId: number, today = u
     const batch = await lockForDecision(trx, user, batchId);
     if (batch.status === "approved") return null; // only the removal of originals may be retried
     if (batch.status !== "proposed") throw new AppError(409, "already_decided", `Batch #${batchId} was already ${batch.status}. Nothing was changed.`);
-    const why = await whyNotApprover(trx, user, batch);
+    const why = await whyNotApprover(user, batch, trx);
     if (why) throw new AppError(403, batch.proposedById === user.id ? "two_person_rule" : "not_approver", why);
 
     const ids = batch.items.filter((i) => i.outcome === "proposed").map((i) => i.documentId);
@@ -121,7 +121,7 @@ export async function rejectBatch(user: CurrentUser, batchId: number, reason: st
     const batch = await lockForDecision(trx, user, batchId);
     if (batch.status !== "proposed") throw new AppError(409, "already_decided", `Batch #${batchId} was already ${batch.status}. Nothing was changed.`);
     // Withdrawing one's own proposal is allowed: only destruction needs a second person.
-    const why = batch.proposedById === user.id ? null : await whyNotApprover(trx, user, batch);
+    const why = batch.proposedById === user.id ? null : await whyNotApprover(user, batch, trx);
     if (why) throw new AppError(403, "not_approver", why.replace("approve", "reject"));
     await trx("disposal_batch_items").where({ batch_id: batchId }).update({ outcome: "rejected" });
     await trx("disposal_batches").where({ id: batchId }).update({ status: "rejected", decided_by: user.id, decided_at: trx.raw("CURRENT_TIMESTAMP(3)"), decision_reason: reason });

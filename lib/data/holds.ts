@@ -185,3 +185,11 @@ export async function listHoldEvents(user: CurrentUser, limit = 200): Promise<Ho
     at: iso(r.created_at)!,
   }));
 }
+
+/** The matters this user may place holds on: all for admins, their own for partners. */
+export async function listHoldableMatters(user: CurrentUser): Promise<{ id: number; number: string; title: string }[]> {
+  if (user.role !== "admin" && user.role !== "partner") return [];
+  const q = getDb()("matters as m").select("m.id", "m.number", "m.title").orderBy("m.number");
+  if (user.role === "partner") q.whereExists((e) => e.select(e.client.raw("1")).from("matter_members as hm").whereRaw("hm.matter_id = m.id").where("hm.user_id", user.id));
+  return q;
+}

@@ -17,7 +17,6 @@ let admin: CurrentUser, clerk: CurrentUser;
 let matterId: number;
 let closeType: number;
 let copyType: number;
-const TODAY = utcDay(new Date());
 
 async function sqlDueOn(documentId: number): Promise<string | null> {
   const r = await owner("documents as d")
