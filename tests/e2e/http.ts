@@ -1,7 +1,8 @@
 // A tiny HTTP client for the app under test that keeps one session cookie, like a browser.
 import { TEST_ENV } from "../test-env";
 
-export const BASE_URL = `http://127.0.0.1:${TEST_ENV.PORT}`;
+// PORT from the environment wins, as applyTestEnv lets it (each checkout runs its app on its own port).
+export const BASE_URL = `http://127.0.0.1:${process.env.PORT || TEST_ENV.PORT}`;
 export const DEMO_PASSWORD = process.env.DEMO_PASSWORD || "foldwright-demo";
 
 export class Client {
