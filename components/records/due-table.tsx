@@ -39,6 +39,7 @@ export function DueTable({ items, canPropose, caution }: DueTableProps) {
 
   return (
     <div className="space-y-3">
+      <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm" data-testid="due-table">
         <thead className="sticky top-0 bg-paper text-left text-xs text-ink-soft">
           <tr>
@@ -84,6 +85,7 @@ export function DueTable({ items, canPropose, caution }: DueTableProps) {
           ))}
         </tbody>
       </table>
+      </div>
       {canPropose && (
         <div className="flex flex-wrap items-end gap-2 rounded border border-paper-edge bg-white/60 p-3">
           <label className="min-w-[16rem] flex-1 text-xs text-ink-soft">

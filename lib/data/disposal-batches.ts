@@ -136,7 +136,7 @@ export async function getBatch(user: CurrentUser, id: number, db: Db = getDb()):
 /** Why this user may not approve the batch, or null when they may (the two-person rule first). */
 export async function whyNotApprover(user: CurrentUser, batch: { proposedById: number; matters: { id: number; number: string }[]; items: { matter: string | null }[] }, db: Db = getDb()): Promise<string | null> {
   if (batch.proposedById === user.id) {
-    return "You proposed this batch, so you cannot approve it: a partner on each matter involved, or another admin, must approve it. Nothing was destroyed.";
+    return "You proposed this batch, so you cannot approve it: a partner on each matter involved, or another admin, must approve it.";
   }
   if (user.role === "admin") return null;
   if (user.role !== "partner") return "Only a partner on each matter involved, or an admin other than the proposer, can approve a disposal batch.";

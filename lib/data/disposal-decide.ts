@@ -44,7 +44,7 @@ export async function approveBatch(user: CurrentUser, batchId: number, today = u
     if (batch.status === "approved") return null; // only the removal of originals may be retried
     if (batch.status !== "proposed") throw new AppError(409, "already_decided", `Batch #${batchId} was already ${batch.status}. Nothing was changed.`);
     const why = await whyNotApprover(user, batch, trx);
-    if (why) throw new AppError(403, batch.proposedById === user.id ? "two_person_rule" : "not_approver", why);
+    if (why) throw new AppError(403, batch.proposedById === user.id ? "two_person_rule" : "not_approver", `${why} Nothing was destroyed.`);
 
     const ids = batch.items.filter((i) => i.outcome === "proposed").map((i) => i.documentId);
     // Lock the documents and every matter they are or were linked to: placing a hold locks the

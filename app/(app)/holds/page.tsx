@@ -61,6 +61,7 @@ export default async function HoldsPage({ searchParams }: { searchParams: Promis
               {p.status === "active" ? `No hold is in force on anything you can see.${mayPlace ? " Place one with the form when a case, an audit or a request means records must be kept." : ""}` : "No holds here."}
             </p>
           ) : (
+            <div className="overflow-x-auto">
             <table className="w-full border-collapse text-sm" data-testid="holds-table">
               <thead className="sticky top-0 bg-paper text-left text-xs text-ink-soft">
                 <tr>
@@ -76,7 +77,7 @@ export default async function HoldsPage({ searchParams }: { searchParams: Promis
                   <tr key={h.id} className="border-t border-paper-edge align-top" data-testid="hold-row">
                     <td className="py-1 pr-2">
                       <span className="font-mono text-xs">#{h.id}</span>{" "}
-                      {h.releasedAt ? <span className="text-xs text-ink-soft">lifted</span> : <span className="rounded border border-brick/40 bg-brick-light px-1 text-xs font-medium text-brick">Legal hold in force</span>}
+                      {h.releasedAt ? <span className="text-xs text-ink-soft">lifted</span> : <span className="whitespace-nowrap rounded border border-brick/40 bg-brick-light px-1 text-xs font-medium text-brick">Legal hold in force</span>}
                     </td>
                     <td className="py-1 pr-2">
                       {h.scope === "matter" ? (
@@ -112,6 +113,7 @@ export default async function HoldsPage({ searchParams }: { searchParams: Promis
                 ))}
               </tbody>
             </table>
+            </div>
           )}
           {pages > 1 && (
             <nav aria-label="Pages" className="flex gap-3 text-xs">

@@ -85,6 +85,7 @@ export default async function BatchPage({ params }: { params: Promise<{ id: stri
         </p>
       )}
 
+      <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm" data-testid="batch-items">
         <thead className="sticky top-0 bg-paper text-left text-xs text-ink-soft">
           <tr>
@@ -113,6 +114,7 @@ export default async function BatchPage({ params }: { params: Promise<{ id: stri
           ))}
         </tbody>
       </table>
+      </div>
     </section>
   );
 }
