@@ -66,6 +66,12 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("disposal_batch_id").unsigned().nullable().references("disposal_batches.id");
     t.index(["disposed_at"]);
   });
+  // "An exact duplicate is never stored twice" holds for documents still kept: a tombstone keeps
+  // its hash, and the same file uploaded after its disposal is a new document, not a duplicate.
+  await knex.schema.alterTable("documents", (t) => t.dropUnique(["sha256"]));
+  // RTRIM: MariaDB refuses a generated column that reads a CHAR as is (its value would depend on
+  // the PAD_CHAR_TO_FULL_LENGTH mode); a hex hash has no trailing spaces, so RTRIM changes nothing.
+  await knex.raw("ALTER TABLE documents ADD COLUMN live_sha256 VARCHAR(64) AS (IF(disposed_at IS NULL, RTRIM(sha256), NULL)) PERSISTENT, ADD UNIQUE INDEX documents_live_sha256_unique (live_sha256), ADD INDEX documents_sha256_index (sha256)");
 
   await grantApp(knex, ["legal_holds", "disposal_batches", "disposal_batch_items"], READ_WRITE);
   await grantApp(knex, ["hold_events"], APPEND_ONLY);
@@ -73,6 +79,8 @@ export async function up(knex: Knex): Promise<void> {
 
 export async function down(knex: Knex): Promise<void> {
   await revokeApp(knex, ["legal_holds", "hold_events", "disposal_batches", "disposal_batch_items"]);
+  // Fails if a disposed file was stored again since; that history cannot go back to one row per hash.
+  await knex.raw("ALTER TABLE documents DROP INDEX documents_live_sha256_unique, DROP INDEX documents_sha256_index, DROP COLUMN live_sha256, ADD UNIQUE INDEX documents_sha256_unique (sha256)");
   await knex.schema.alterTable("documents", (t) => {
     t.dropForeign(["disposal_batch_id"]);
     t.dropIndex(["disposed_at"]);

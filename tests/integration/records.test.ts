@@ -207,3 +207,19 @@ describe("disposal with two people", () => {
     expect(past.map((d) => d.id)).not.toContain(soon.id);
   });
 });
+
+describe("after disposal", () => {
+  it("the same file uploaded again is kept as a new document, not called a duplicate of the tombstone", async () => {
+    const { storeUpload } = await import("@/lib/data/intake");
+    const { makeTextPdf } = await import("../helpers/make-files");
+    const bytes = new Uint8Array(await makeTextPdf([["Kept again after disposal", String(Date.now())]]));
+    const first = await storeUpload(clerk, "kept-again.pdf", bytes);
+    expect(first.status).toBe("reading");
+    const firstId = (first as { id: number }).id;
+    await owner("documents").where({ id: firstId }).update({ disposed_at: new Date() }); // as a disposal leaves it
+    const again = await storeUpload(clerk, "kept-again.pdf", bytes);
+    expect(again).toMatchObject({ status: "reading", httpStatus: 201 });
+    expect((again as { id: number }).id).not.toBe(firstId);
+    expect(await storeUpload(clerk, "kept-again.pdf", bytes)).toMatchObject({ status: "duplicate" }); // a live copy is
+  });
+});
