@@ -62,7 +62,8 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
       <DocumentRecords document={document} holds={holds} canPlaceHold={can(user.role, "holds.place")} disposal={disposal} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-6">
-          <TextPanel text={document.text} truncated={document.textTruncated} charCount={document.charCount} reading={document.status === "reading"} />
+          {/* A tombstone's text was cleared with its original; the notice above says so. */}
+          {!document.disposedAt && <TextPanel text={document.text} truncated={document.textTruncated} charCount={document.charCount} reading={document.status === "reading"} />}
           <Timeline events={timeline} />
         </div>
         <aside className="lg:sticky lg:top-6 lg:self-start">
