@@ -51,12 +51,12 @@ export async function approveBatch(user: CurrentUser, batchId: number, today = u
     // same rows first (lib/data/holds.ts), so a hold and an approval never pass each other.
     const matterIds = await trx("document_matter_links").whereIn("document_id", ids).pluck("matter_id");
     await trx("matters").whereIn("id", [...new Set([...matterIds, ...batch.matters.map((m) => m.id)])]).forUpdate().select("id");
+    await trx("documents").whereIn("id", ids).forUpdate().select("id");
     const rows: Row[] = await trx("documents as d")
       .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id")
       .leftJoin("matters as m", "m.id", "d.matter_id")
       .whereIn("d.id", ids)
       .whereNull("d.disposed_at")
-      .forUpdate()
       .select("d.id", "d.matter_id", "d.cabinet_type_id")
       .select(trx.raw(`${heldSql()} AS held`), trx.raw(`${dueOnSql()} AS due_on`));
     const held = rows.filter((r) => Number(r.held)).map((r) => Number(r.id));

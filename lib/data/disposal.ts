@@ -72,9 +72,9 @@ export async function proposeBatch(user: CurrentUser, input: { documentIds: numb
   if (user.role !== "admin") throw notAllowed("propose a disposal batch");
   const ids = [...new Set(input.documentIds)];
   return getDb().transaction(async (trx) => {
+    await trx("documents").whereIn("id", ids).forUpdate().select("id"); // one proposal of a document at a time
     const rows = await retentionDocuments(trx, user)
       .whereIn("d.id", ids)
-      .forUpdate()
       .select("d.id", "c.retention_years", "c.retention_trigger", "c.retention_source")
       .select(trx.raw(`${dueOnSql()} AS due_on`), trx.raw(`${heldSql()} AS held`), trx.raw(`${OPEN_BATCH_SQL} AS in_batch`));
     const found = new Map(rows.map((r: Row) => [Number(r.id), r]));
@@ -101,5 +101,5 @@ export async function proposeBatch(user: CurrentUser, input: { documentIds: numb
       })),
     );
     return Number(batchId);
-  });
+  }, { isolationLevel: "read committed" });
 }

@@ -102,10 +102,11 @@ async function assertMayHold(db: Db, user: CurrentUser, matterId: number | null,
 }
 
 async function lockTarget(trx: Knex.Transaction, user: CurrentUser, t: { matterId?: number; documentId?: number }) {
+  // Lock the target row alone: a FOR UPDATE over a join also locks the joined rows, in an order
+  // that could deadlock with an approval (which locks matters, then documents).
   if (t.documentId !== undefined) {
-    const doc = await whereDocumentVisible(trx("documents as d").leftJoin("matters as m", "m.id", "d.matter_id").where("d.id", t.documentId), user)
-      .forUpdate()
-      .first("d.id", "d.matter_id", "d.disposed_at", "m.number");
+    await trx("documents").where({ id: t.documentId }).forUpdate().first("id");
+    const doc = await whereDocumentVisible(trx("documents as d").leftJoin("matters as m", "m.id", "d.matter_id").where("d.id", t.documentId), user).first("d.id", "d.matter_id", "d.disposed_at", "m.number");
     if (!doc) {
       if (await trx("documents").where({ id: t.documentId }).first("id")) throw new AppError(403, "restricted_matter", "This document is in a restricted matter you are not on. Ask an admin or the matter's partner.");
       throw notFound("That document");
@@ -113,7 +114,8 @@ async function lockTarget(trx: Knex.Transaction, user: CurrentUser, t: { matterI
     if (doc.disposed_at) throw new AppError(409, "disposed", "This document was already destroyed under an approved disposal; there is nothing left to hold.");
     return { matterId: doc.matter_id as number | null, number: doc.number as string | null };
   }
-  const matter = await whereMatterVisible(trx("matters as m").where("m.id", t.matterId!), user, "m").forUpdate().first("m.id", "m.number");
+  await trx("matters").where({ id: t.matterId! }).forUpdate().first("id");
+  const matter = await whereMatterVisible(trx("matters as m").where("m.id", t.matterId!), user, "m").first("m.id", "m.number");
   if (!matter) throw notFound("That matter");
   return { matterId: matter.id as number, number: matter.number as string };
 }
@@ -144,14 +146,15 @@ export async function placeHold(user: CurrentUser, input: { matterId?: number; d
 
 export async function releaseHold(user: CurrentUser, holdId: number, reason: string): Promise<HoldView> {
   await getDb().transaction(async (trx) => {
-    const hold = await visibleHolds(trx, user).where("h.id", holdId).forUpdate().first();
+    await trx("legal_holds").where({ id: holdId }).forUpdate().first("id");
+    const hold = await visibleHolds(trx, user).where("h.id", holdId).first();
     if (!hold) throw notFound("That hold");
     if (hold.released_at) throw new AppError(409, "already_released", `Hold #${holdId} was already lifted by ${hold.releaser}. Nothing was changed.`);
     const matterId = (hold.matter_id ?? (await trx("documents").where({ id: hold.document_id }).first("matter_id"))?.matter_id ?? null) as number | null;
     await assertMayHold(trx, user, matterId, (hold.number as string | null) ?? null, "lift");
     await trx("legal_holds").where({ id: holdId }).update({ released_by: user.id, released_at: trx.raw("CURRENT_TIMESTAMP(3)"), release_reason: reason });
     await trx("hold_events").insert({ hold_id: holdId, action: "released", user_id: user.id, reason, reference: hold.reference });
-  });
+  }, { isolationLevel: "read committed" });
   return (await listHoldById(holdId))!;
 }
 

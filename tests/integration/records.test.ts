@@ -223,3 +223,27 @@ describe("after disposal", () => {
     expect(await storeUpload(clerk, "kept-again.pdf", bytes)).toMatchObject({ status: "duplicate" }); // a live copy is
   });
 });
+
+describe("a hold racing an approval", () => {
+  it("never ends with a document both under a hold and destroyed", async () => {
+    const ROUNDS = 6; // each round races one hold against one approval on a fresh batch
+    for (let round = 0; round < ROUNDS; round++) {
+      const [x, y] = [await pastDue(`race-x-${round}`), await pastDue(`race-y-${round}`)];
+      const batch = await proposeBatch(admin, { documentIds: [x.id, y.id], note: `Race ${round}` });
+      const [hold, approval] = await Promise.allSettled([
+        placeHold(partner, { documentId: x.id, reason: "Raced hold", reference: `RACE-${round}` }),
+        approveBatch(admin2, batch),
+      ]);
+      expect(approval.status).toBe("fulfilled"); // y is never held, so approval always has work
+      const row = await owner("documents").where({ id: x.id }).first("disposed_at");
+      if (hold.status === "fulfilled") {
+        expect(row.disposed_at).toBeNull(); // the hold came first: x was kept
+        expect(await headObject(x.key)).not.toBeNull();
+        await releaseHold(partner, hold.value.id, "Race over");
+      } else {
+        expect(hold.reason).toMatchObject({ status: 409, code: "disposed" }); // the approval came first
+        expect(row.disposed_at).not.toBeNull();
+      }
+    }
+  });
+});
