@@ -34,6 +34,7 @@ describe("records through the API", () => {
     expect(status).toBe(200);
     expect(body.document).toMatchObject({ legalHold: false, disposedAt: null, retention: { basis: "after_filing", rule: "7 years after filing" } });
     expect(body.document.retention.dueOn).toMatch(/^\d{4}-01-15$/);
+    expect(body.holds).toEqual([]);
     const past = await json(c.clerk, "GET", "/api/documents?filed=1&retention=past_due&pageSize=200");
     expect(past.body.items.map((d: { id: number }) => d.id)).toContain(openDoc.id);
     expect((await json(c.clerk, "GET", "/api/documents?retention=soon")).status).toBe(422);
