@@ -51,6 +51,9 @@ describe("records through the API", () => {
         expect((await json(outsider, "POST", "/api/holds", { documentId: walledDoc.id, reason: "Trying", reference: "X" })).status).toBe(403);
       }
       expect(await text(c.partner, "/api/holds")).toContain("CV-2026-0042");
+      const held = await json(c.partner, "GET", `/api/documents/${walledDoc.id}`);
+      expect(held.body.document.legalHold).toBe(true);
+      expect(held.body.holds.map((h: { reference: string }) => h.reference)).toEqual(["CV-2026-0042"]);
       expect(await text(c.partner, "/api/disposal/due?pageSize=500")).not.toContain(walledDoc.name); // held
     } finally {
       expect((await json(c.partner, "POST", `/api/holds/${placed.body.hold.id}/release`, { reason: "Dispute settled" })).status).toBe(200);
