@@ -22,7 +22,6 @@ function fontFiles(): { regular: string; bold: string } {
 
 const MARGIN = 48; // points: two thirds of an inch, room for a binder's holes
 const BODY = 9;
-const SMALL = 7.5; // hashes and dates in a mono face at this size fit one line of the column
 
 const day = (iso: string | null) => (iso ? iso.slice(0, 16).replace("T", " ") : "–");
 
@@ -32,7 +31,7 @@ function item(doc: PDFKit.PDFDocument, i: CertificateItem, width: number): void 
   doc.font("Body").text(`${i.cabinetType ?? "no cabinet type"} · matter ${i.matter ?? "none"} · ${i.rule}, retention date ${i.dueOn}`, { width });
   doc.text(`Uploaded ${day(i.uploadedAt)} UTC · filed ${day(i.filedAt)} UTC · destroyed ${day(i.disposedAt)} UTC`, { width });
   doc.text(`Rule source: ${i.ruleSource}`, { width });
-  doc.font("Courier").fontSize(SMALL).text(`SHA-256 ${i.sha256}`, { width });
+  doc.text(`SHA-256 ${i.sha256}`, { width });
   doc.moveDown(0.5);
 }
 
@@ -54,6 +53,7 @@ export function certificatePdf(c: Certificate, created: Date = new Date()): Prom
     doc.moveDown(0.5);
     doc.text(`Proposed by ${c.proposedBy} on ${day(c.proposedAt)} UTC. Note: ${c.note}`, { width });
     doc.text(`Approved by ${c.approvedBy} on ${day(c.approvedAt)} UTC.`, { width });
+    doc.text(`This certificate was made by Foldwright on ${day(created.toISOString())} UTC from the batch's record.`, { width });
     doc.moveDown(0.5);
     doc.font("Body-Bold").text("Caution", { width }).font("Body").text(c.caution, { width });
     doc.moveDown(0.8);
