@@ -1,5 +1,7 @@
 import Link from "next/link";
 import type { DocumentSummary } from "@/lib/data/documents";
+import { DisposedBadge, HoldBadge } from "@/components/records/hold-badge";
+import { RetentionWords } from "@/components/records/retention-words";
 
 const HOW: Record<string, string> = { accepted: "Accepted", refiled: "Refiled", by_hand: "Filed by hand", auto: "Auto-filed" };
 
@@ -13,16 +15,21 @@ export function FiledTable({ items }: { items: DocumentSummary[] }) {
           <th className="py-1 pr-2 font-medium">Cabinet type</th>
           <th className="py-1 pr-2 font-medium">Filed (UTC)</th>
           <th className="py-1 pr-2 font-medium">How, by whom</th>
+          <th className="py-1 pr-2 font-medium">Retention date</th>
         </tr>
       </thead>
       <tbody>
         {items.map((d) => (
           <tr key={d.id} className="border-t border-paper-edge align-top" data-testid="filed-row">
-            <td className="max-w-[22rem] truncate py-1 pr-2">
-              <Link href={`/documents/${d.id}`} className="text-verdigris hover:underline" title={d.name}>
-                {d.name}
-              </Link>
-              {d.legalHold && <span className="ml-1 rounded bg-brick-light px-1 text-xs text-brick">legal hold</span>}
+            <td className="max-w-[22rem] py-1 pr-2">
+              {/* The badges sit outside the truncated name so a long name never hides a hold. */}
+              <div className="flex min-w-0 items-center">
+                <Link href={`/documents/${d.id}`} className="truncate text-verdigris hover:underline" title={d.name}>
+                  {d.name}
+                </Link>
+                {d.legalHold && <HoldBadge className="shrink-0" />}
+                {d.disposedAt && <DisposedBadge />}
+              </div>
             </td>
             <td className="py-1 pr-2 font-mono text-xs">{d.matter ?? "–"}</td>
             <td className="py-1 pr-2">{d.cabinetType ?? "–"}</td>
@@ -30,6 +37,9 @@ export function FiledTable({ items }: { items: DocumentSummary[] }) {
             <td className="py-1 pr-2 text-xs">
               {d.filedHow ? HOW[d.filedHow] ?? d.filedHow : "–"}
               {d.filedBy ? `, ${d.filedBy}` : d.filedHow === "auto" ? ", Foldwright" : ""}
+            </td>
+            <td className="py-1 pr-2" data-testid="retention-cell">
+              <RetentionWords retention={d.retention} held={d.legalHold} disposedAt={d.disposedAt} />
             </td>
           </tr>
         ))}

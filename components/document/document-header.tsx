@@ -1,6 +1,7 @@
 import type { DocumentDetail } from "@/lib/data/documents";
 import type { FilingEvent } from "@/lib/data/filing-record";
 import { actionWords } from "@/components/history/action-words";
+import { HoldBadge } from "@/components/records/hold-badge";
 import { DocumentStateBadge } from "./state-badge";
 import type { DocumentState } from "./document-state";
 import { formatKind, formatSize, formatUtc } from "./format";
@@ -30,13 +31,18 @@ export function DocumentHeader({ document: d, state, placement }: DocumentHeader
           {d.name}
         </h1>
         <DocumentStateBadge state={state} />
-        <a
-          href={`/api/documents/${d.id}/original`}
-          className="ml-auto rounded border border-paper-edge bg-white/60 px-3 py-1.5 text-sm font-medium hover:bg-paper-deep"
-          data-testid="download-original"
-        >
-          Download original
-        </a>
+        {d.legalHold && <HoldBadge className="self-center" />}
+        {d.disposedAt ? (
+          <span className="ml-auto px-3 py-1.5 text-sm text-ink-soft">Original destroyed</span>
+        ) : (
+          <a
+            href={`/api/documents/${d.id}/original`}
+            className="ml-auto rounded border border-paper-edge bg-white/60 px-3 py-1.5 text-sm font-medium hover:bg-paper-deep"
+            data-testid="download-original"
+          >
+            Download original
+          </a>
+        )}
       </div>
       <dl className="grid grid-cols-2 gap-x-6 gap-y-2 sm:grid-cols-3 lg:grid-cols-6">
         <Fact label="Document">

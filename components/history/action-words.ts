@@ -12,6 +12,9 @@ export const ACTION_WORDS: Record<FilingAction, string> = {
   moved: "Moved",
 };
 
+/** Records actions (issue 11), not offered as History filters. */
+const RECORD_WORDS: Record<string, string> = { disposed: "Destroyed under an approved disposal" };
+
 export function actionWords(action: string): string {
-  return ACTION_WORDS[action as FilingAction] ?? action;
+  return ACTION_WORDS[action as FilingAction] ?? RECORD_WORDS[action] ?? action;
 }

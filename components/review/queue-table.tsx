@@ -1,6 +1,7 @@
 "use client";
 import { Confidence } from "@/components/ui/confidence";
 import type { QueueItem } from "./types";
+import { HoldBadge } from "@/components/records/hold-badge";
 
 type Sort = "age" | "confidence" | "cabinet" | "matter";
 
@@ -58,6 +59,7 @@ export function QueueTable({ items, selectedId, checked, sort, dir, onSort, onSe
             <td className="max-w-[16rem] truncate py-1 pr-2" title={item.name}>
               {item.name}
               {item.status === "unreadable" && <span className="ml-1 rounded bg-brick-light px-1 text-xs text-brick">unreadable</span>}
+              {item.legalHold && <HoldBadge />}
             </td>
             <td className="py-1 pr-2">
               {item.filedIn?.cabinetType ?? item.suggestion?.cabinetType ?? <span className="text-ink-faint">File by hand</span>}

@@ -3,9 +3,11 @@ import "server-only";
 // the original's location for a download — all through the ethical wall.
 import { getDb } from "@/db";
 import { maskSensitive } from "@/lib/intake";
-import { notFound } from "@/lib/errors";
+import { AppError, notFound } from "@/lib/errors";
 import { documentsWithMatters, walledDocumentSql, whereDocumentVisible } from "@/lib/data/document-access";
 import type { CurrentUser } from "@/lib/data/users";
+import { dueOnSql, heldSql } from "@/lib/data/retention-sql";
+import { addDays, describeRule, DUE_SOON_DAYS, retentionDate, utcDay, type RetentionBasis, type RetentionTrigger } from "@/lib/records/retention-date";
 
 export interface DocumentSummary {
   id: number;
@@ -23,12 +25,22 @@ export interface DocumentSummary {
   filedAt: string | null;
   filedHow: string | null;
   filedBy: string | null;
+  /** Under a legal hold now (on the document, its matter, or a matter it was linked to). */
   legalHold: boolean;
   /**
    * Only on the uploader's own Intake list: the document is behind a wall the uploader is outside
    * of. Then the name and this flag are all there is; every other field is blanked.
    */
   restricted?: true;
+  retention: DocumentRetention;
+  /** A tombstone: the original was destroyed and the text cleared on this date. */
+  disposedAt: string | null;
+}
+
+export interface DocumentRetention {
+  dueOn: string | null;
+  basis: RetentionBasis;
+  rule: string | null; // the cabinet type's rule in words
 }
 
 /** What the uploader of a walled document sees of it at Intake, and nothing else. */
@@ -60,9 +72,26 @@ const SUMMARY_COLUMNS = [
   "c.name as cabinet",
   "d.filed_at",
   "d.filed_how",
-  "d.legal_hold",
   "fu.name as filer",
+  "c.retention_years",
+  "c.retention_trigger",
+  "m.status as matter_status",
+  "m.closed_on as matter_closed_on",
+  "d.disposed_at",
 ];
+
+function summaryColumns(db: ReturnType<typeof getDb>) {
+  return [...SUMMARY_COLUMNS, db.raw(`${heldSql("d")} AS held`)];
+}
+
+const day = (v: unknown) => (v ? utcDay(v as string) : null);
+
+function toRetention(r: Row): DocumentRetention {
+  if (!r.retention_trigger) return { dueOn: null, basis: "not_filed", rule: null };
+  const rule = { years: r.retention_years === null ? null : Number(r.retention_years), trigger: r.retention_trigger as RetentionTrigger };
+  const date = retentionDate(rule, { filedOn: day(r.filed_at), matterStatus: (r.matter_status as "open" | "closed" | null) ?? null, matterClosedOn: day(r.matter_closed_on) });
+  return { ...date, rule: describeRule(rule) };
+}
 
 type Row = Record<string, unknown>;
 
@@ -83,7 +112,9 @@ function toSummary(r: Row): DocumentSummary {
     filedAt: r.filed_at ? new Date(r.filed_at as string).toISOString() : null,
     filedHow: (r.filed_how as string | null) ?? null,
     filedBy: (r.filer as string | null) ?? null,
-    legalHold: Boolean(r.legal_hold),
+    legalHold: Boolean(Number(r.held)),
+    retention: toRetention(r),
+    disposedAt: r.disposed_at ? new Date(r.disposed_at as string).toISOString() : null,
   };
 }
 
@@ -107,13 +138,14 @@ function toRestrictedStub(r: Row): DocumentSummary {
     id: Number(r.id), name: String(r.original_name), mediaType: "", sizeBytes: 0, status: "ready", reason: RESTRICTED_NOTE,
     uploadedAt: new Date(r.uploaded_at as string).toISOString(), uploadedBy: "", matter: null, cabinetType: null, ocrUsed: false,
     pageCount: null, filedAt: null, filedHow: null, filedBy: null, legalHold: false, restricted: true,
+    retention: { dueOn: null, basis: "not_filed", rule: null }, disposedAt: null,
   };
 }
 
 export async function getDocument(user: CurrentUser, id: number): Promise<DocumentDetail> {
   const r = await visibleDocuments(user)
     .where("d.id", id)
-    .first([...SUMMARY_COLUMNS, "d.char_count", "d.read_ms", "d.ssn_count", "d.routing_count", "d.card_count", "d.text"]);
+    .first([...summaryColumns(getDb()), "d.char_count", "d.read_ms", "d.ssn_count", "d.routing_count", "d.card_count", "d.text"]);
   if (!r) throw missing();
   const text = r.text as string | null;
   return {
@@ -134,6 +166,8 @@ export interface DocumentFilters {
   cabinetTypeId?: number;
   matterId?: number;
   filed?: boolean;
+  /** past_due: the retention date is today or earlier; due_soon: within the next 90 days. */
+  retention?: "past_due" | "due_soon";
   page: number;
   pageSize: number;
 }
@@ -165,11 +199,17 @@ export async function listDocuments(user: CurrentUser, f: DocumentFilters): Prom
   if (f.cabinetTypeId) base.where("d.cabinet_type_id", f.cabinetTypeId);
   if (f.matterId) base.where("d.matter_id", f.matterId);
   if (f.filed !== undefined) base.where((w) => (f.filed ? w.whereNotNull("d.filed_at") : w.whereNull("d.filed_at")));
+  if (f.retention) {
+    const today = utcDay(new Date());
+    base.whereNull("d.disposed_at");
+    if (f.retention === "past_due") base.whereRaw(`${dueOnSql()} <= ?`, [today]);
+    else base.whereRaw(`${dueOnSql()} > ? AND ${dueOnSql()} <= ?`, [today, addDays(today, DUE_SOON_DAYS)]);
+  }
   const search = f.q ? toFulltextQuery(f.q) : "";
   if (search) base.whereRaw("MATCH(d.original_name, d.text) AGAINST (? IN BOOLEAN MODE)", [search]);
   const [{ total }] = await base.clone().clearSelect().count({ total: "d.id" });
   const rows = await base
-    .select(SUMMARY_COLUMNS)
+    .select(summaryColumns(getDb()))
     .orderByRaw(f.filed ? "d.filed_at DESC" : "d.uploaded_at DESC")
     .orderBy("d.id", "desc")
     .limit(f.pageSize)
@@ -188,7 +228,7 @@ async function listOwnUploads(user: CurrentUser, f: DocumentFilters): Promise<{ 
   if (f.ids?.length) base.whereIn("d.id", f.ids);
   const [{ total }] = await base.clone().count({ total: "d.id" });
   const rows = await base
-    .select([...SUMMARY_COLUMNS, db.raw(`${walled} AS walled`, bindings)])
+    .select([...summaryColumns(db), db.raw(`${walled} AS walled`, bindings)])
     .orderBy("d.uploaded_at", "desc")
     .orderBy("d.id", "desc")
     .limit(f.pageSize)
@@ -197,8 +237,9 @@ async function listOwnUploads(user: CurrentUser, f: DocumentFilters): Promise<{ 
 }
 
 export async function findOriginal(user: CurrentUser, id: number): Promise<{ key: string; name: string; mediaType: string; size: number }> {
-  const r = await visibleDocuments(user).where("d.id", id).first("d.storage_key", "d.original_name", "d.media_type", "d.size_bytes");
+  const r = await visibleDocuments(user).where("d.id", id).first("d.storage_key", "d.original_name", "d.media_type", "d.size_bytes", "d.disposed_at");
   if (!r) throw missing();
+  if (r.disposed_at) throw new AppError(410, "disposed", `This document's original was destroyed on ${utcDay(r.disposed_at)} under an approved disposal; only its tombstone remains. The certificate of disposal is in Disposal.`);
   return { key: r.storage_key, name: r.original_name, mediaType: r.media_type, size: Number(r.size_bytes) };
 }
 

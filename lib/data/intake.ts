@@ -52,6 +52,7 @@ async function describeDuplicate(user: CurrentUser, sha256: string): Promise<Dup
     .leftJoin("users as u", "u.id", "d.uploaded_by")
     .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id")
     .where("d.sha256", sha256)
+    .whereNull("d.disposed_at") // a tombstone's file is gone: the same file may be kept again
     .first("d.id", "d.original_name", "d.uploaded_at", "d.status", "u.name as uploader", "m.number as matter", "m.restricted", "c.name as cabinet");
   if (!row) return null;
   const visible = await whereDocumentVisible(documentsWithMatters(db).where("d.id", row.id), user).first("d.id");

@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { whereDocumentVisible } from "@/lib/data/document-access";
+import { heldSql } from "@/lib/data/retention-sql";
 import type { CurrentUser } from "@/lib/data/users";
 
 export interface QueueFilters {
@@ -26,6 +27,7 @@ export interface QueueItem {
   pageCount: number | null;
   ocrUsed: boolean;
   filedHow: string | null;
+  legalHold: boolean;
   suggestion: null | {
     method: "model" | "cold_start" | "blended";
     modelVersionId: number | null;
@@ -71,6 +73,7 @@ export async function listQueue(user: CurrentUser, f: QueueFilters): Promise<{ i
       "d.cabinet_type_id", "d.matter_id", "fct.name as filed_type", "m.number as filed_matter",
       "s.id as sid", "s.method", "s.model_version_id", "s.top_cabinet_type_id", "ct.name as top_type", "s.top_confidence",
       "s.no_confident_match", "s.top_matter_id", "sm.number as top_matter", "s.matter_ambiguous",
+      db.raw(`${heldSql("d")} AS held`),
     )
     .orderByRaw(`${SORTS[f.sort]} IS NULL, ${SORTS[f.sort]} ${f.dir === "asc" ? "ASC" : "DESC"}`)
     .orderBy("d.id", f.dir === "asc" ? "asc" : "desc")
@@ -86,6 +89,7 @@ export async function listQueue(user: CurrentUser, f: QueueFilters): Promise<{ i
       pageCount: r.page_count,
       ocrUsed: Boolean(r.ocr_used),
       filedHow: r.filed_how,
+      legalHold: Boolean(Number(r.held)),
       suggestion: r.sid
         ? {
             method: r.method,

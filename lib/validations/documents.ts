@@ -12,6 +12,7 @@ export const documentListSchema = z.object({
   cabinetType: z.coerce.number().int().positive().optional(),
   matter: z.coerce.number().int().positive().optional(),
   filed: z.enum(["0", "1", "true", "false"]).optional(),
+  retention: z.enum(["past_due", "due_soon"], { message: "retention is past_due (the retention date is today or earlier) or due_soon (within 90 days)." }).optional(),
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });

@@ -31,7 +31,8 @@ async function trainThroughApi(): Promise<number> {
   const res = await admin.request("POST", "/api/models/retrain");
   expect(res.status).toBe(202);
   const { versionId: id } = await res.json();
-  const v = await waitFor("the new version to finish", async () => (await models()).versions.find((x) => x.id === id && x.status !== "training"));
+  // "candidate" is the moment between storing the model and promoting it: wait past it too.
+  const v = await waitFor("the new version to finish", async () => (await models()).versions.find((x) => x.id === id && !["training", "candidate"].includes(x.status)));
   expect(v).toMatchObject({ status: "current" });
   return id;
 }

@@ -68,6 +68,22 @@ const MATRIX: Row[] = [
   { method: "GET", path: "/api/setup-events?format=csv", file: "api/setup-events/route.ts", note: "CSV", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
   { method: "GET", path: "/api/settings", file: "api/settings/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
   { method: "PATCH", path: "/api/settings", file: "api/settings/route.ts", body: { autoFileTarget: 0.98 }, expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 403 } },
+  // Records (issue 11). Holds: everyone who reads sees them; partners and admins place and lift
+  // (a body without a target is a 422; an unknown hold a 404). Disposal: admins propose; partners
+  // and admins decide; auditors read; clerks have no part. Impact counts are for Setup (admins).
+  { method: "GET", path: "/api/holds", file: "api/holds/route.ts", expect: all(200, 401) },
+  { method: "POST", path: "/api/holds", file: "api/holds/route.ts", body: {}, expect: { signedOut: 401, clerk: 403, partner: 422, admin: 422, auditor: 403 } },
+  { method: "POST", path: "/api/holds/999999/release", file: "api/holds/[id]/release/route.ts", body: { reason: "Matrix check" }, expect: { signedOut: 401, clerk: 403, partner: 404, admin: 404, auditor: 403 } },
+  { method: "GET", path: "/api/disposal/due", file: "api/disposal/due/route.ts", expect: { signedOut: 401, clerk: 403, partner: 200, admin: 200, auditor: 200 } },
+  { method: "GET", path: "/api/disposal/batches", file: "api/disposal/batches/route.ts", expect: { signedOut: 401, clerk: 403, partner: 200, admin: 200, auditor: 200 } },
+  { method: "POST", path: "/api/disposal/batches", file: "api/disposal/batches/route.ts", body: {}, expect: { signedOut: 401, clerk: 403, partner: 403, admin: 422, auditor: 403 } },
+  { method: "POST", path: "/api/disposal/batches/999999/approve", file: "api/disposal/batches/[id]/approve/route.ts", expect: { signedOut: 401, clerk: 403, partner: 404, admin: 404, auditor: 403 } },
+  { method: "POST", path: "/api/disposal/batches/999999/reject", file: "api/disposal/batches/[id]/reject/route.ts", body: { reason: "Matrix check" }, expect: { signedOut: 401, clerk: 403, partner: 404, admin: 404, auditor: 403 } },
+  { method: "GET", path: "/api/disposal/batches/999999/certificate?format=pdf", file: "api/disposal/batches/[id]/certificate/route.ts", expect: { signedOut: 401, clerk: 403, partner: 404, admin: 404, auditor: 404 } },
+  { method: "GET", path: "/api/retention/impact?cabinetTypeId=1&trigger=permanent", file: "api/retention/impact/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 403 } },
+  { method: "GET", path: "/holds", file: "(app)/holds/page.tsx", expect: page(["clerk", "partner", "admin", "auditor"]) },
+  { method: "GET", path: "/disposal", file: "(app)/disposal/page.tsx", expect: page(["partner", "admin", "auditor"]) },
+  { method: "GET", path: "/disposal/batches/999999", file: "(app)/disposal/batches/[id]/page.tsx", note: "no such batch", expect: { signedOut: 307, clerk: 403, partner: 404, admin: 404, auditor: 404 } },
   { method: "GET", path: () => `/documents/${fixtures.open}`, file: "(app)/documents/[id]/page.tsx", expect: page(["clerk", "partner", "admin", "auditor"]) },
   { method: "GET", path: () => `/documents/${fixtures.walled}`, file: "(app)/documents/[id]/page.tsx", note: "restricted matter", expect: { signedOut: 307, clerk: 404, partner: 200, admin: 200, auditor: 404 } },
   { method: "GET", path: "/intake", file: "(app)/intake/page.tsx", expect: page(["clerk", "admin"]) },

@@ -6,10 +6,10 @@ import { BASE_URL, DEMO_PASSWORD } from "./http";
 // Each demo role signs in through the real form in Chromium and sees its own navigation
 // (DESIGN.md §2 and §3 are the source of the expected areas).
 const NAV = {
-  clerk: ["Intake", "To review", "Cabinets"],
-  partner: ["To review", "Cabinets"],
-  admin: ["Intake", "To review", "Cabinets", "History", "Models", "Setup"],
-  auditor: ["Cabinets", "History", "Models"],
+  clerk: ["Intake", "To review", "Cabinets", "Holds"],
+  partner: ["To review", "Cabinets", "Holds", "Disposal"],
+  admin: ["Intake", "To review", "Cabinets", "Holds", "Disposal", "History", "Models", "Setup"],
+  auditor: ["Cabinets", "Holds", "Disposal", "History", "Models"],
 } as const;
 
 let browser: Browser;

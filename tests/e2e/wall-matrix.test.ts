@@ -76,6 +76,11 @@ const SURFACES: Surface[] = [
   { name: "Cabinets of the matter", file: "(app)/cabinets/page.tsx", path: () => `/cabinets?matter=${fx.restrictedId}`, roles: ALL_READERS, shows: ["filed"] },
   { name: "matter picker", file: "api/matters/route.ts", path: () => "/api/matters", roles: ALL_READERS, shows: [] },
   { name: "To review page", file: "(app)/review/page.tsx", path: () => "/review", roles: DECIDERS, shows: [] },
+  { name: "holds list", file: "api/holds/route.ts", path: () => "/api/holds", roles: ALL_READERS, shows: ["filed"] },
+  { name: "Holds page", file: "(app)/holds/page.tsx", path: () => "/holds", roles: ALL_READERS, shows: ["filed"] },
+  { name: "disposal due list", file: "api/disposal/due/route.ts", path: () => "/api/disposal/due?pageSize=200", roles: ["partner", "admin", "auditor"], shows: [] },
+  { name: "disposal batches", file: "api/disposal/batches/route.ts", path: () => "/api/disposal/batches", roles: ["partner", "admin", "auditor"], shows: [] },
+  { name: "Disposal page", file: "(app)/disposal/page.tsx", path: () => "/disposal", roles: ["partner", "admin", "auditor"], shows: [] },
   { name: "client list", file: "api/clients/route.ts", path: () => "/api/clients", roles: ALL_READERS, shows: [] },
   { name: "setup record", file: "api/setup-events/route.ts", path: () => "/api/setup-events?pageSize=200", roles: AUDIT, shows: [] },
   { name: "setup record as CSV", file: "api/setup-events/route.ts", path: () => "/api/setup-events?format=csv", roles: AUDIT, shows: [] },
@@ -105,6 +110,9 @@ const EXEMPT: Record<string, string> = {
   "(app)/setup/outbox/page.tsx": "mail sent, for admins only, who are inside every wall",
   "(app)/profile/page.tsx": "the signed-in person's own settings",
   "(auth)/forgot-password/page.tsx": "public form",
+  "api/retention/impact/route.ts": "counts for a rule change, admins only (inside every wall)",
+  "(app)/disposal/batches/[id]/page.tsx": "one batch; its wall is checked by tests/integration/records.test.ts and tests/e2e/records-http.test.ts",
+  "api/disposal/batches/[id]/certificate/route.ts": "one batch's certificate; its wall is checked by tests/e2e/records-http.test.ts",
   "(auth)/invite/[token]/page.tsx": "public form behind a one-time link",
   "(auth)/reset-password/[token]/page.tsx": "public form behind a one-time link",
 };
@@ -170,6 +178,9 @@ describe("ethical wall matrix", () => {
     await saveSuggestion(null, null, suggestion(fx.docs.candidate.id, fx.openId, [fx.openId, fx.restrictedId]));
     await fileDocument(admin, fx.docs.movedOut.id, { action: "file", cabinetTypeId: fx.typeId, matterId: fx.restrictedId });
     await fileDocument(admin, fx.docs.movedOut.id, { action: "move", matterId: fx.openId, reason: "filed in the wrong matter" });
+    // A legal hold on the filed one, placed the way a person places it.
+    const hold = await clients.admin.request("POST", "/api/holds", { documentId: fx.docs.filed.id, reason: "Wall check", reference: `WALL-${run}` });
+    if (hold.status !== 201) throw new Error(`placing the fixture hold answered ${hold.status}: ${await hold.text()}`);
   });
   afterAll(() => db.destroy());
 

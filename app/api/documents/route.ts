@@ -19,6 +19,7 @@ export const GET = handle(async (request: Request) => {
     ids: params.ids?.split(",").map(Number),
     cabinetTypeId: params.cabinetType,
     matterId: params.matter,
+    retention: params.retention,
     filed: params.filed === undefined ? undefined : params.filed === "1" || params.filed === "true",
     page: params.page,
     pageSize: params.pageSize,

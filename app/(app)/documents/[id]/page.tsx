@@ -10,6 +10,9 @@ import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/data/current-user";
 import { getDocument } from "@/lib/data/documents";
 import { getLatestSuggestion, listDocumentTimeline } from "@/lib/data/filing-record";
+import { findDisposalOf } from "@/lib/data/disposal-batches";
+import { listHoldsOnDocument } from "@/lib/data/holds";
+import { DocumentRecords } from "@/components/records/document-records";
 import { AppError } from "@/lib/errors";
 import { documentIdSchema } from "@/lib/validations/documents";
 
@@ -36,7 +39,12 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
   const id = documentIdSchema.safeParse((await params).id);
   if (!id.success) notFound();
   const document = await loadDocument(user, id.data); // checks access before anything else is read
-  const [suggestion, timeline] = await Promise.all([getLatestSuggestion(user, id.data), listDocumentTimeline(user, id.data)]);
+  const [suggestion, timeline, holds, disposal] = await Promise.all([
+    getLatestSuggestion(user, id.data),
+    listDocumentTimeline(user, id.data),
+    listHoldsOnDocument(id.data),
+    document.disposedAt ? findDisposalOf(id.data) : null,
+  ]);
   const state = documentState(document, suggestion, timeline);
 
   return (
@@ -51,9 +59,11 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
         )}
       </nav>
       <DocumentHeader document={document} state={state} placement={lastPlacement(timeline)} />
+      <DocumentRecords document={document} holds={holds} canPlaceHold={can(user.role, "holds.place")} disposal={disposal} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-6">
-          <TextPanel text={document.text} truncated={document.textTruncated} charCount={document.charCount} reading={document.status === "reading"} />
+          {/* A tombstone's text was cleared with its original; the notice above says so. */}
+          {!document.disposedAt && <TextPanel text={document.text} truncated={document.textTruncated} charCount={document.charCount} reading={document.status === "reading"} />}
           <Timeline events={timeline} />
         </div>
         <aside className="lg:sticky lg:top-6 lg:self-start">
