@@ -1,17 +1,9 @@
 // The shapes the People screens receive from the server (lib/data/people.ts, lib/data/senders.ts).
-export type Role = "clerk" | "partner" | "admin" | "auditor";
-export type PersonState = "invited" | "active" | "deactivated";
-
-export interface PersonView {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  state: PersonState;
-  lastSignInAt: string | null;
-  invitedAt: string | null;
-  invitationExpiresAt: string | null;
-}
+import type { Person } from "@/lib/data/people";
+import type { Role } from "@/lib/auth/permissions";
+export type { Role };
+export type { PersonState } from "@/lib/data/people";
+export type PersonView = Person;
 
 export const ROLE_WORDS: Record<Role, string> = { clerk: "Clerk", partner: "Partner", admin: "Admin", auditor: "Auditor" };
 

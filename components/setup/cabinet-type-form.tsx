@@ -1,12 +1,11 @@
 "use client";
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { Button } from "@/components/ui/button";
 import { requestJson } from "@/components/ui/request-json";
 import { RETENTION_CAUTION } from "@/lib/retention";
 import { cabinetTypeSchema, MAX_RETENTION_YEARS, type RetentionTrigger } from "@/lib/validations/setup";
 import { described, Field, INPUT } from "./field";
+import { FormFooter } from "./form-footer";
 import type { CabinetTypeFormValues } from "./form-values";
 import { splitList, useSchemaForm } from "./use-schema-form";
 
@@ -87,19 +86,7 @@ export function CabinetTypeForm({ id, initial, retentionImpact }: Props) {
         <div data-testid="retention-impact">{retentionImpact}</div>
         <p className="text-xs text-ink-faint">{RETENTION_CAUTION}</p>
       </fieldset>
-      {serverError && (
-        <p role="alert" className="rounded bg-brick-light/60 px-3 py-2 text-sm text-brick" data-testid="form-error">
-          {serverError}
-        </p>
-      )}
-      <div className="flex items-center gap-3">
-        <Button type="submit" disabled={busy} data-testid="save-cabinet-type">
-          {busy ? "Saving…" : id ? "Save changes" : "Add cabinet type"}
-        </Button>
-        <Link href="/setup/cabinet-types" className="text-sm text-verdigris hover:underline" scroll={false}>
-          Cancel
-        </Link>
-      </div>
+      <FormFooter serverError={serverError} busy={busy} editing={Boolean(id)} addLabel="Add cabinet type" saveTestId="save-cabinet-type" cancelHref="/setup/cabinet-types" />
     </form>
   );
 }

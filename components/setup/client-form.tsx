@@ -1,11 +1,10 @@
 "use client";
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { Button } from "@/components/ui/button";
 import { requestJson } from "@/components/ui/request-json";
 import { clientSchema } from "@/lib/validations/setup";
 import { described, Field, INPUT } from "./field";
+import { FormFooter } from "./form-footer";
 import type { ClientFormValues } from "./form-values";
 import { splitList, useSchemaForm } from "./use-schema-form";
 
@@ -51,19 +50,7 @@ export function ClientForm({ id, initial }: { id?: number; initial: ClientFormVa
       <Field id="cl-tax" label="Tax ID, last four digits only" error={errors.taxIdLast4} hint="Never type the whole number: Foldwright keeps only the last four to recognise the client's papers.">
         <input {...described("cl-tax", errors.taxIdLast4)} className={`${INPUT} w-24 font-mono`} inputMode="numeric" autoComplete="off" value={values.taxIdLast4} onChange={(e) => set("taxIdLast4", e.target.value)} />
       </Field>
-      {serverError && (
-        <p role="alert" className="rounded bg-brick-light/60 px-3 py-2 text-sm text-brick" data-testid="form-error">
-          {serverError}
-        </p>
-      )}
-      <div className="flex items-center gap-3">
-        <Button type="submit" disabled={busy} data-testid="save-client">
-          {busy ? "Saving…" : id ? "Save changes" : "Add client"}
-        </Button>
-        <Link href="/setup/matters" className="text-sm text-verdigris hover:underline" scroll={false}>
-          Cancel
-        </Link>
-      </div>
+      <FormFooter serverError={serverError} busy={busy} editing={Boolean(id)} addLabel="Add client" saveTestId="save-client" cancelHref="/setup/matters" />
     </form>
   );
 }

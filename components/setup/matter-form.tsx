@@ -1,12 +1,11 @@
 "use client";
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { requestJson } from "@/components/ui/request-json";
 import { matterSchema } from "@/lib/validations/setup";
 import { described, Field, INPUT } from "./field";
+import { FormFooter } from "./form-footer";
 import { todayUtc, type MatterFormValues } from "./form-values";
 import { useSchemaForm } from "./use-schema-form";
 
@@ -140,19 +139,7 @@ export function MatterForm({ id, initial, clients, people, retentionImpact }: Pr
         </ul>
         {errors.team && <p className="text-xs text-brick">{errors.team}</p>}
       </fieldset>
-      {serverError && (
-        <p role="alert" className="rounded bg-brick-light/60 px-3 py-2 text-sm text-brick" data-testid="form-error">
-          {serverError}
-        </p>
-      )}
-      <div className="flex items-center gap-3">
-        <Button type="submit" disabled={busy} data-testid="save-matter">
-          {busy ? "Saving…" : id ? "Save changes" : "Add matter"}
-        </Button>
-        <Link href="/setup/matters" className="text-sm text-verdigris hover:underline" scroll={false}>
-          Cancel
-        </Link>
-      </div>
+      <FormFooter serverError={serverError} busy={busy} editing={Boolean(id)} addLabel="Add matter" saveTestId="save-matter" cancelHref="/setup/matters" />
       <ConfirmDialog open={confirming} title={`Remove ${removed.length === 1 ? removed[0].name : `${removed.length} people`} from the team?`} confirmLabel="Save and remove" busy={busy} error={null} onConfirm={save} onCancel={() => setConfirming(false)}>
         <p>{removed.map((p) => p.name).join(", ")} will leave the team of {values.number || "this matter"}.</p>
         <p>{values.restricted ? "The matter is restricted: they lose sight of it and its documents on their next request." : "The matter is not restricted, so they still see it as everyone in the office does."} You can add them back later; both changes stay on the setup record.</p>

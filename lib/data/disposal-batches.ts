@@ -8,6 +8,7 @@ import { whereDocumentWalled } from "@/lib/data/document-access";
 import type { CurrentUser } from "@/lib/data/users";
 import { AppError, notFound } from "@/lib/errors";
 import { describeRule, utcDay, type RetentionTrigger } from "@/lib/records/retention-date";
+import type { CertificateItem } from "@/lib/records/certificate-types";
 import { heldSql } from "@/lib/data/retention-sql";
 
 export type BatchStatus = "proposed" | "approved" | "rejected";
@@ -27,21 +28,10 @@ export interface BatchSummary {
   disposed: number;
 }
 
-export interface BatchItem {
-  documentId: number;
-  name: string;
-  sha256: string;
-  matter: string | null;
-  cabinetType: string | null;
-  uploadedAt: string;
-  filedAt: string | null;
-  dueOn: string;
-  rule: string;
-  ruleSource: string;
+/** A certificate's line for one document, with its outcome in the batch and whether it is held now. */
+export interface BatchItem extends Omit<CertificateItem, "outcome"> {
   outcome: ItemOutcome;
   heldNow: boolean;
-  disposedAt: string | null;
-  objectDeletedAt: string | null;
 }
 
 export interface BatchDetail extends BatchSummary {

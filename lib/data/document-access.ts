@@ -54,11 +54,8 @@ export function whereDocumentWalled(q: Query, user: CurrentUser, alias = "d"): Q
 /** Keeps only matters (aliased `alias`) the user may see: open ones, or restricted ones they are on. */
 export function whereMatterVisible(q: Query, user: CurrentUser, alias = "m"): Query {
   if (user.role === "admin") return q;
-  return q.where((w) =>
-    w
-      .where(`${alias}.restricted`, false)
-      .orWhereExists((e) => e.select(e.client.raw("1")).from("matter_members as vmm").whereRaw("vmm.matter_id = ??.id", [alias]).where("vmm.user_id", user.id)),
-  );
+  const [walled, bindings] = walledMatterSql("??.id", user);
+  return q.whereRaw(`NOT ${walled}`, [alias, ...bindings]);
 }
 
 /** True when the user may know the document exists (and it does). */

@@ -1,6 +1,7 @@
 import "server-only";
 // Reading documents: one with its state and masked text, lists with filters and search, and
 // the original's location for a download — all through the ethical wall.
+import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { maskSensitive } from "@/lib/intake";
 import { AppError, notFound } from "@/lib/errors";
@@ -118,13 +119,16 @@ function toSummary(r: Row): DocumentSummary {
   };
 }
 
-function visibleDocuments(user: CurrentUser) {
-  const db = getDb();
-  const q = documentsWithMatters(db)
+/** Documents with what a summary shows of them: uploader, filer, matter and cabinet type. */
+function documentsWithNames(db: Knex) {
+  return documentsWithMatters(db)
     .leftJoin("users as u", "u.id", "d.uploaded_by")
     .leftJoin("users as fu", "fu.id", "d.filed_by")
     .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id");
-  return whereDocumentVisible(q, user);
+}
+
+function visibleDocuments(user: CurrentUser) {
+  return whereDocumentVisible(documentsWithNames(getDb()), user);
 }
 
 /**
@@ -220,11 +224,7 @@ export async function listDocuments(user: CurrentUser, f: DocumentFilters): Prom
 async function listOwnUploads(user: CurrentUser, f: DocumentFilters): Promise<{ items: DocumentSummary[]; total: number }> {
   const db = getDb();
   const [walled, bindings] = walledDocumentSql("d", user);
-  const base = documentsWithMatters(db)
-    .leftJoin("users as u", "u.id", "d.uploaded_by")
-    .leftJoin("users as fu", "fu.id", "d.filed_by")
-    .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id")
-    .where("d.uploaded_by", user.id);
+  const base = documentsWithNames(db).where("d.uploaded_by", user.id);
   if (f.ids?.length) base.whereIn("d.id", f.ids);
   const [{ total }] = await base.clone().count({ total: "d.id" });
   const rows = await base

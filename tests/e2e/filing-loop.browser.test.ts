@@ -5,6 +5,7 @@ import { BASE_URL, Client, DEMO_PASSWORD } from "./http";
 import { makeTextPdf } from "../helpers/make-files";
 import { ownerDb } from "../helpers/db";
 import { insertFiledDocuments } from "../helpers/filed-documents";
+import { waitUntil as pollUntil } from "../helpers/wait";
 
 // The whole loop in a browser: a model is trained through the API from human filings; a clerk
 // uploads two generated PDFs, sees them reach To review with a suggestion and runner-ups,
@@ -14,15 +15,7 @@ const owner = ownerDb();
 let browser: Browser;
 let versionId: number;
 
-async function waitFor<T>(what: string, probe: () => Promise<T | false | undefined>, ms = 120_000): Promise<T> {
-  const deadline = Date.now() + ms;
-  for (;;) {
-    const v = await probe();
-    if (v) return v;
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 500));
-  }
-}
+const waitFor = <T,>(what: string, probe: () => Promise<T | undefined | false | null>, ms = 120_000) => pollUntil(what, probe, ms, 500);
 
 async function trainThroughApi(): Promise<number> {
   const admin = await Client.signedIn("admin@example.com");

@@ -1,7 +1,6 @@
-import fs from "node:fs";
-import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Client } from "./http";
+import { listRoutesAndPages } from "./app-files";
 import { makeTextPdf } from "../helpers/make-files";
 import { ownerDb } from "../helpers/db";
 
@@ -165,16 +164,7 @@ describe("role matrix", () => {
   }
 
   it("lists every route handler and page that exists", () => {
-    const appDir = path.resolve(__dirname, "../../app");
-    const found: string[] = [];
-    const walk = (dir: string) => {
-      for (const e of fs.readdirSync(dir, { withFileTypes: true })) {
-        const full = path.join(dir, e.name);
-        if (e.isDirectory()) walk(full);
-        else if (/^(route\.ts|page\.tsx)$/.test(e.name)) found.push(path.relative(appDir, full));
-      }
-    };
-    walk(appDir);
+    const found = listRoutesAndPages();
     const exempt = ["(auth)/sign-in/page.tsx", "(app)/page.tsx"]; // public sign-in; home only redirects
     const listed = new Set(MATRIX.map((r) => r.file));
     expect(found.filter((f) => !listed.has(f) && !exempt.includes(f)).sort()).toEqual([]);

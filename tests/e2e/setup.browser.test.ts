@@ -4,6 +4,7 @@ import { launchBrowser } from "./browser";
 import { BASE_URL, Client, DEMO_PASSWORD } from "./http";
 import { makeTextPdf } from "../helpers/make-files";
 import { ownerDb } from "../helpers/db";
+import { waitUntil as pollUntil } from "../helpers/wait";
 
 // An office set up from the screens alone: the admin adds a cabinet type, a client and a
 // restricted matter with a team (the clerk on it); the clerk then uploads a document and files it
@@ -23,15 +24,7 @@ async function signIn(page: Page, email: string) {
   await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
 }
 
-async function waitFor<T>(what: string, probe: () => Promise<T | false | undefined>, ms = 120_000): Promise<T> {
-  const deadline = Date.now() + ms;
-  for (;;) {
-    const v = await probe();
-    if (v) return v;
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 500));
-  }
-}
+const waitFor = <T,>(what: string, probe: () => Promise<T | undefined | false | null>, ms = 120_000) => pollUntil(what, probe, ms, 500);
 
 beforeAll(async () => {
   browser = await launchBrowser();

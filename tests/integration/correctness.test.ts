@@ -17,21 +17,14 @@ import { appDb, ownerDb } from "../helpers/db";
 import { demoUser } from "../helpers/users";
 import { insertFiledDocuments, insertReadDocument, typeIds } from "../helpers/filed-documents";
 import type { CurrentUser } from "@/lib/data/users";
+import { waitUntil as pollUntil } from "../helpers/wait";
 
 // Defects found by reading the code (issue: the wall holds everywhere), each with a test that
 // failed before its fix.
 const owner = ownerDb();
 let admin: CurrentUser;
 
-async function waitUntil<T>(what: string, probe: () => Promise<T | undefined | false | null>, ms = 30_000): Promise<T> {
-  const deadline = Date.now() + ms;
-  for (;;) {
-    const v = await probe();
-    if (v) return v;
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
+const waitUntil = <T,>(what: string, probe: () => Promise<T | undefined | false | null>, ms = 30_000) => pollUntil(what, probe, ms, 100);
 
 beforeAll(async () => {
   admin = await demoUser("admin@example.com");

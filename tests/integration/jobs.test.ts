@@ -9,20 +9,13 @@ import type { CurrentUser } from "@/lib/data/users";
 import { makeDocx, makeImagePdf, renderTextPng } from "../helpers/make-files";
 import { ownerDb } from "../helpers/db";
 import { demoUser } from "../helpers/users";
+import { waitUntil as pollUntil } from "../helpers/wait";
 
 // The MariaDB job queue: SKIP LOCKED claims, leases, retries, and a worker killed mid-job.
 const owner = ownerDb();
 let clerk: CurrentUser;
 
-async function waitUntil<T>(what: string, probe: () => Promise<T | undefined | false>, ms = 60_000): Promise<T> {
-  const deadline = Date.now() + ms;
-  for (;;) {
-    const v = await probe();
-    if (v) return v;
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
+const waitUntil = <T,>(what: string, probe: () => Promise<T | undefined | false | null>, ms = 60_000) => pollUntil(what, probe, ms, 200);
 
 beforeAll(async () => {
   clerk = await demoUser("clerk@example.com");
