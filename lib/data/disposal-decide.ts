@@ -8,6 +8,7 @@ import "server-only";
 // without its file.
 import type { Knex } from "knex";
 import { getDb } from "@/db";
+import { deleteTerms } from "@/lib/data/document-terms";
 import { getBatch, whyNotApprover, type BatchDetail } from "@/lib/data/disposal-batches";
 import { dueOnSql, heldSql } from "@/lib/data/retention-sql";
 import { appendFilingEvent } from "@/lib/data/record";
@@ -69,6 +70,8 @@ export async function approveBatch(user: CurrentUser, batchId: number, today = u
     for (const r of go) {
       const item = batch.items.find((i) => i.documentId === Number(r.id))!;
       await trx("documents").where({ id: r.id }).update({ text: null, disposed_at: trx.raw("CURRENT_TIMESTAMP(3)"), disposal_batch_id: batchId });
+      // Its term counts tell what the text said: they go with it.
+      await deleteTerms(trx, [Number(r.id)]);
       // The "why" terms of a suggestion are words of the text: they go with it.
       await trx("suggestions").where({ document_id: r.id }).update({ why: JSON.stringify([]) });
       await appendFilingEvent(trx, {

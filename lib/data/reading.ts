@@ -3,27 +3,37 @@ import "server-only";
 import { getDb } from "@/db";
 import { completeJob, enqueueJob } from "@/lib/data/jobs";
 import { SUGGEST_JOB } from "@/lib/jobs/kinds";
+import { storeTerms, termsRowOf } from "@/lib/data/document-terms";
 import type { ReadOutcome, SensitiveCounts } from "@/lib/intake";
 
 export interface DocumentToRead {
   id: number;
   storage_key: string;
+  original_name: string;
   media_type: string;
   status: string;
 }
 
 export async function findDocumentToRead(id: number): Promise<DocumentToRead | undefined> {
-  return getDb()("documents").where({ id }).first("id", "storage_key", "media_type", "status");
+  return getDb()("documents").where({ id }).first("id", "storage_key", "original_name", "media_type", "status");
 }
 
-/** Returns false (and writes nothing) when this worker no longer holds the job. */
+/**
+ * Returns false (and writes nothing) when this worker no longer holds the job. A read text's
+ * term counts (lib/data/document-terms.ts) are computed first and stored with it.
+ */
 export async function saveReading(
   jobId: number,
   workerId: string,
-  documentId: number,
+  doc: Pick<DocumentToRead, "id" | "original_name" | "media_type">,
   outcome: ReadOutcome,
   counts: SensitiveCounts,
 ): Promise<boolean> {
+  const documentId = doc.id;
+  const terms =
+    outcome.status === "ready"
+      ? termsRowOf(documentId, { text: outcome.text, original_name: doc.original_name, media_type: doc.media_type, page_count: outcome.pageCount, ocr_used: outcome.ocrUsed })
+      : null;
   return getDb().transaction(async (trx) => {
     if (!(await completeJob(trx, jobId, workerId))) return false;
     const common = { read_at: trx.fn.now() };
@@ -43,6 +53,7 @@ export async function saveReading(
         unreadable_code: null,
         unreadable_reason: null,
       });
+      await storeTerms([terms!], trx);
       await enqueueJob(SUGGEST_JOB, documentId, null, trx);
     } else {
       await trx("documents").where({ id: documentId }).update({

@@ -5,6 +5,7 @@ import { getDb } from "@/db";
 import { completeJob, enqueueJob } from "@/lib/data/jobs";
 import { appendFilingEvent, linkDocumentToMatters } from "@/lib/data/record";
 import type { NewSuggestion } from "@/lib/filing/suggestion";
+import { TOKENIZER_VERSION } from "@/lib/ml";
 
 export interface DocumentForSuggestion {
   id: number;
@@ -15,10 +16,15 @@ export interface DocumentForSuggestion {
   ocr_used: number;
   status: string;
   filed_at: Date | null;
+  /** Stored term counts of the current tokenizer (JSON, lib/data/document-terms.ts), when there are. */
+  term_counts: string | null;
 }
 
 export async function findDocumentForSuggestion(id: number): Promise<DocumentForSuggestion | undefined> {
-  return getDb()("documents").where({ id }).first("id", "text", "original_name", "media_type", "page_count", "ocr_used", "status", "filed_at");
+  return getDb()("documents as d")
+    .leftJoin("document_terms as t", (j) => j.on("t.document_id", "d.id").andOnVal("t.tokenizer_version", TOKENIZER_VERSION))
+    .where("d.id", id)
+    .first("d.id", "d.text", "d.original_name", "d.media_type", "d.page_count", "d.ocr_used", "d.status", "d.filed_at", "t.counts as term_counts");
 }
 
 async function insertSuggestion(trx: Knex.Transaction, s: NewSuggestion): Promise<void> {

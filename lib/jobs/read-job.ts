@@ -15,7 +15,7 @@ export const readJob: JobHandler = {
     const bytes = await getObjectBytes(doc.storage_key); // storage down → throws → retried later
     const outcome = await readDocument(bytes, doc.media_type, { timeLimitMs: env.read.timeLimitMs, maxPages: env.read.maxPages });
     const counts = outcome.status === "ready" ? countSensitive(outcome.text) : { ssn: 0, routing: 0, card: 0 };
-    await saveReading(job.id, workerId, doc.id, outcome, counts);
+    await saveReading(job.id, workerId, doc, outcome, counts);
   },
   async giveUp(job) {
     if (job.document_id) {

@@ -2,10 +2,13 @@
 // one pool for reading and suggesting (JOBS_CONCURRENCY at a time), one for training (one at a
 // time, so a long training never holds up the day's reading), one for mail (sending, password
 // reset requests, scans by e-mail: quick jobs that must not wait behind OCR), the nightly
-// retraining, the daily digest, and the SMTP listener for scans by e-mail.
+// retraining, the daily digest, the SMTP listener for scans by e-mail, and (once at start) the
+// queueing of "tokenize" jobs for documents whose term counts are missing or outdated.
 import { env } from "@/lib/env";
 import { readJob } from "@/lib/jobs/read-job";
-import { MAIL_INTAKE_JOB, MAIL_JOB, READ_JOB, RESET_REQUEST_JOB, SUGGEST_JOB, TRAIN_JOB } from "@/lib/jobs/kinds";
+import { MAIL_INTAKE_JOB, MAIL_JOB, READ_JOB, RESET_REQUEST_JOB, SUGGEST_JOB, TOKENIZE_JOB, TRAIN_JOB } from "@/lib/jobs/kinds";
+import { tokenizeJob } from "@/lib/jobs/tokenize-job";
+import { queueRetokenizing } from "@/lib/data/document-terms";
 import { mailIntakeJob } from "@/lib/jobs/mail-intake-job";
 import { mailJob } from "@/lib/jobs/mail-job";
 import { resetRequestJob } from "@/lib/jobs/reset-request-job";
@@ -44,14 +47,16 @@ async function listenForScans(): Promise<IntakeListener | null> {
 
 export function startBackgroundWork(): Background | undefined {
   if (!env.jobs.enabled) return undefined;
-  globalForJobs.foldwrightBackground ??= {
+  if (globalForJobs.foldwrightBackground) return globalForJobs.foldwrightBackground;
+  globalForJobs.foldwrightBackground = {
     documents: startWorkers({
       handlers: { [READ_JOB]: readJob, [SUGGEST_JOB]: suggestJob },
       concurrency: env.jobs.concurrency,
       pollMs: env.jobs.pollMs,
       leaseSeconds: env.jobs.leaseSeconds,
     }),
-    training: startWorkers({ handlers: { [TRAIN_JOB]: trainJob }, concurrency: 1, pollMs: env.jobs.pollMs * 2, leaseSeconds: env.jobs.leaseSeconds }),
+    // Re-tokenising (a new tokenizer version, rows a seed wrote) waits with training, off the reading pool.
+    training: startWorkers({ handlers: { [TRAIN_JOB]: trainJob, [TOKENIZE_JOB]: tokenizeJob }, concurrency: 1, pollMs: env.jobs.pollMs * 2, leaseSeconds: env.jobs.leaseSeconds }),
     mail: startWorkers({
       handlers: { [MAIL_JOB]: mailJob, [RESET_REQUEST_JOB]: resetRequestJob, [MAIL_INTAKE_JOB]: mailIntakeJob },
       concurrency: MAIL_CONCURRENCY,
@@ -62,6 +67,10 @@ export function startBackgroundWork(): Background | undefined {
     digest: scheduleDailyDigest(),
     listener: listenForScans(),
   };
+  queueRetokenizing().then(
+    (n) => n > 0 && console.log(`[tokenize] ${n} document${n === 1 ? "" : "s"} queued to be tokenised again`),
+    (e) => console.error("[tokenize] could not queue re-tokenising:", e),
+  );
   return globalForJobs.foldwrightBackground;
 }
 

@@ -3,7 +3,7 @@
 // for an office's usual few thousand filings; from HOLDOUT_FROM documents on, one stratified
 // hold-out (a fifth of each class) instead, as DESIGN §5 allows for large sets: five trainings
 // become one, and with that many documents a fifth still holds hundreds per class.
-import { crossValidate, evaluateSplit, type EvaluationReport, type LabelledDocument, type TrainOptionsInput } from "@/lib/ml";
+import { crossValidateCounts, evaluateCountSplit, type CountMatrix, type EvaluationReport, type TrainOptionsInput } from "@/lib/ml";
 import { assignStratifiedFolds } from "@/lib/ml/folds";
 
 export const FOLD_SEED = 42;
@@ -20,14 +20,14 @@ export function describeEvaluation(docs: number, folds: number): string {
   return docs >= HOLDOUT_FROM ? `a stratified hold-out of a fifth of ${docs} documents` : `${folds}-fold cross-validation on ${docs} documents`;
 }
 
-export function scoreOnFolds(docs: LabelledDocument[], folds: number, options: TrainOptionsInput, target: number): Promise<EvaluationReport> {
-  if (docs.length >= HOLDOUT_FROM) {
-    const foldOf = assignStratifiedFolds(docs.map((d) => d.label), 5, FOLD_SEED);
-    return evaluateSplit(
-      docs.filter((_, i) => foldOf[i] !== 0),
-      docs.filter((_, i) => foldOf[i] === 0),
-      { ...options, precisionTarget: target },
-    );
+/** Scores settings on rows of a CountMatrix (stored term counts); `labelOf[r]` is matrix row r's label. */
+export function scoreOnFolds(m: CountMatrix, rowIds: ArrayLike<number>, labelOf: string[], folds: number, options: TrainOptionsInput, target: number): Promise<EvaluationReport> {
+  if (rowIds.length >= HOLDOUT_FROM) {
+    const foldOf = assignStratifiedFolds(Array.from(rowIds, (r) => labelOf[r]), 5, FOLD_SEED);
+    const trainRows: number[] = [];
+    const testRows: number[] = [];
+    for (let i = 0; i < rowIds.length; i++) (foldOf[i] !== 0 ? trainRows : testRows).push(rowIds[i]);
+    return evaluateCountSplit(m, trainRows, testRows, labelOf, { ...options, precisionTarget: target });
   }
-  return crossValidate(docs, folds, { ...options, seed: FOLD_SEED, precisionTarget: target });
+  return crossValidateCounts(m, rowIds, labelOf, folds, { ...options, seed: FOLD_SEED, precisionTarget: target });
 }

@@ -18,8 +18,8 @@ import {
 } from "@/lib/data/models";
 import { getOfficeSettings } from "@/lib/data/settings";
 import { FOLDWRIGHT } from "@/lib/data/users";
-import { loadTrainingSet, type TrainingRow } from "@/lib/data/training-set";
-import { resolveOptions, saveModel, trainModel, type TrainOptionsInput } from "@/lib/ml";
+import { loadTrainingCounts } from "@/lib/data/training-set";
+import { resolveOptions, saveModel, trainOnCounts, type TrainOptionsInput } from "@/lib/ml";
 import { putObject } from "@/storage/s3";
 import { chooseFolds, describeEvaluation, scoreOnFolds } from "@/lib/learning/evaluate-candidate";
 import { TRAIN_JOB } from "@/lib/jobs/kinds";
@@ -54,10 +54,11 @@ export interface TrainingHooks {
   transformLabels?: (labels: string[]) => string[];
 }
 
-function eligible(rows: TrainingRow[], minExamples: number): TrainingRow[] {
+/** Matrix rows whose label has at least `minExamples` rows. */
+function eligibleRows(labels: string[], minExamples: number): number[] {
   const counts = new Map<string, number>();
-  for (const r of rows) counts.set(r.label, (counts.get(r.label) ?? 0) + 1);
-  return rows.filter((r) => counts.get(r.label)! >= minExamples);
+  for (const l of labels) counts.set(l, (counts.get(l) ?? 0) + 1);
+  return labels.flatMap((l, r) => (counts.get(l)! >= minExamples ? [r] : []));
 }
 
 /**
@@ -71,16 +72,21 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}, 
     try {
       await progress("Gathering human-filed documents");
       const settings = await getOfficeSettings(FOLDWRIGHT);
-      const rows = eligible(await loadTrainingSet(), settings.minExamplesPerType);
-      const labels = hooks.transformLabels ? hooks.transformLabels(rows.map((r) => r.label)) : rows.map((r) => r.label);
-      const docs = rows.map((r, i) => ({ text: r.text, filename: r.filename, meta: r.meta, label: labels[i] }));
+      // Stored term counts, streamed: no text is loaded or tokenised (lib/data/training-set.ts).
+      const set = await loadTrainingCounts();
+      const rows = eligibleRows(set.labels, settings.minExamplesPerType);
+      const truth = set.labels;
+      const labels = hooks.transformLabels ? hooks.transformLabels(rows.map((r) => truth[r])) : rows.map((r) => truth[r]);
+      // labelOf: the candidate's label of each matrix row (only the eligible rows are read).
+      const labelOf = [...truth];
+      rows.forEach((r, i) => (labelOf[r] = labels[i]));
       const classes = [...new Set(labels)];
       if (classes.length < 2) {
         throw new Error(`Too few filed documents to train: at least two cabinet types need ${settings.minExamplesPerType} human-filed documents each (found ${classes.length}).`);
       }
       const folds = chooseFolds(labels);
-      await progress(`Evaluating by ${describeEvaluation(docs.length, folds)}`);
-      const report = await scoreOnFolds(docs, folds, DEFAULT_PARAMS, settings.autoFileTarget);
+      await progress(`Evaluating by ${describeEvaluation(rows.length, folds)}`);
+      const report = await scoreOnFolds(set.matrix, rows, labelOf, folds, DEFAULT_PARAMS, settings.autoFileTarget);
 
       const current = await findCurrentModelParams();
       let compared: number | null = null;
@@ -89,13 +95,12 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}, 
         if (sameSettings) compared = report.macroF1;
         else {
           await progress("Scoring the current model's settings on the same folds");
-          const truth = rows.map((r) => ({ text: r.text, filename: r.filename, meta: r.meta, label: r.label }));
-          compared = (await scoreOnFolds(truth, folds, current.params as TrainOptionsInput, settings.autoFileTarget)).macroF1;
+          compared = (await scoreOnFolds(set.matrix, rows, truth, folds, current.params as TrainOptionsInput, settings.autoFileTarget)).macroF1;
         }
       }
 
       await progress("Training on all documents");
-      const model = await trainModel(docs, DEFAULT_PARAMS);
+      const model = await trainOnCounts(set.matrix, rows, labels, DEFAULT_PARAMS);
       model.metrics = report;
       const bytes = saveModel(model);
       const key = `models/version-${versionId}-${Date.now()}.bin`;
@@ -109,7 +114,7 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}, 
         class_list: JSON.stringify(model.classes.map(Number)),
         class_counts: JSON.stringify(counts),
         vocabulary_size: model.terms.length,
-        train_count: docs.length,
+        train_count: rows.length,
         metrics: JSON.stringify(report),
         macro_f1: report.macroF1,
         accuracy: report.accuracy,

@@ -7,7 +7,7 @@ import { getOfficeSettings } from "@/lib/data/settings";
 import type { DocumentForSuggestion } from "@/lib/data/suggestions";
 import type { NewSuggestion, RankedType } from "@/lib/filing/suggestion";
 import { findKindByMediaType } from "@/lib/intake";
-import { predictDocument, type MlDocument } from "@/lib/ml";
+import { decodeTermCounts, predictCounts, predictDocument, type MlDocument } from "@/lib/ml";
 import { blendWithModel, buildTypeProfiles, rankByProfiles, type TypeProfiles } from "@/lib/filing/cold-start";
 import { decideMatter, matchMatters } from "@/lib/filing/match-matter";
 import { getServingModel } from "@/lib/learning/model-store";
@@ -34,7 +34,8 @@ export async function computeSuggestion(doc: DocumentForSuggestion): Promise<New
   let noConfidentMatch = false;
   let modelTop: { cabinetTypeId: number; confidence: number } | null = null;
   if (serving) {
-    const prediction = predictDocument(serving.model, mlDoc, 6);
+    // Stored counts when the document has them (tokenised once, when it was read).
+    const prediction = doc.term_counts ? predictCounts(serving.model, [decodeTermCounts(doc.term_counts)], 6)[0] : predictDocument(serving.model, mlDoc, 6);
     const counts = serving.model.counts;
     const modelRanked = prediction.ranked
       .map((r) => ({ cabinetTypeId: Number(r.label), confidence: r.confidence, probability: r.probability }))

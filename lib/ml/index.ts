@@ -6,8 +6,10 @@ export type { FoldwrightModel, TrainOptions, TrainOptionsInput, TrainTimings } f
 export type { EvaluationReport, EvaluationOptions, EvaluationTimings } from "./evaluate";
 export type { AutoFileBar } from "./auto-file";
 export type { ClassificationMetrics, ClassMetrics } from "./metrics";
-export { trainModel, predictDocument, predictDocuments, vectoriseDocuments, resolveOptions, MODEL_KIND, MODEL_FORMAT_VERSION } from "./model";
-export { evaluateSplit, crossValidate } from "./evaluate";
+export { trainModel, trainOnCounts, predictDocument, predictDocuments, predictCounts, vectoriseDocuments, resolveOptions, MODEL_KIND, MODEL_FORMAT_VERSION } from "./model";
+export { evaluateSplit, crossValidate, evaluateCountSplit, crossValidateCounts } from "./evaluate";
 export { saveModel, loadModel } from "./artifact";
 export { findAutoFileBar } from "./auto-file";
-export { tokenizeDocument } from "./tokenize";
+export { tokenizeDocument, TOKENIZER_VERSION, DEFAULT_TOKENIZE_OPTIONS } from "./tokenize";
+export type { CountMatrix, TermCounts } from "./term-counts";
+export { countTerms, encodeTermCounts, decodeTermCounts, CountMatrixBuilder, countMatrixOf, allRows } from "./term-counts";

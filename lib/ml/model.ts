@@ -4,10 +4,11 @@ import type { CsrMatrix } from "./csr";
 import { DEFAULT_LOGISTIC_OPTIONS } from "./logistic";
 import { chooseThreads, trainOneVsRest, warmUpWorkers } from "./one-vs-rest";
 import { predictRows, type LinearClassifier, type Prediction } from "./predict";
-import { fitVocabulary, transformTokens, DEFAULT_TFIDF_OPTIONS, type TfidfOptions, type TfidfVocabulary } from "./tfidf";
+import { transformTokens, DEFAULT_TFIDF_OPTIONS, type TfidfOptions, type TfidfVocabulary } from "./tfidf";
+import { allRows, countMatrixOf, fitCountVocabulary, transformCountRows, transformCounts, type CountMatrix, type TermCounts } from "./term-counts";
 import { tokenizeDocument, DEFAULT_TOKENIZE_OPTIONS, type TokenizeOptions } from "./tokenize";
 import type { LabelledDocument, MlDocument } from "./types";
-import { checkDocument, checkTrainingSet } from "./validate";
+import { checkDocument, checkLabels, checkTrainingSet } from "./validate";
 
 export const MODEL_KIND = "foldwright-model";
 export const MODEL_FORMAT_VERSION = 1;
@@ -100,19 +101,39 @@ export async function trainModel(
 ): Promise<FoldwrightModel & { timings: TrainTimings }> {
   checkTrainingSet(docs);
   const options = resolveOptions(input);
-  const classes = [...new Set(docs.map((d) => d.label))].sort();
+  warmUpWorkers(Math.min(options.threads, new Set(docs.map((d) => d.label)).size));
+  const t0 = performance.now();
+  const counts = countMatrixOf(docs, options.tokenize);
+  const tokenizeMs = performance.now() - t0;
+  const model = await trainOnCounts(counts, allRows(counts.rows), docs.map((d) => d.label), options);
+  model.timings.vectoriseMs += tokenizeMs;
+  return model;
+}
+
+/**
+ * Trains on rows of a CountMatrix (stored term counts; see term-counts.ts): `labels[i]` is the
+ * label of row `rowIds[i]`. The same model as trainModel on the documents those counts came from.
+ */
+export async function trainOnCounts(
+  m: CountMatrix,
+  rowIds: ArrayLike<number>,
+  labels: string[],
+  input: TrainOptionsInput = {},
+): Promise<FoldwrightModel & { timings: TrainTimings }> {
+  checkLabels(labels, rowIds.length);
+  const options = resolveOptions(input);
+  const classes = [...new Set(labels)].sort();
   warmUpWorkers(Math.min(options.threads, classes.length));
   const t0 = performance.now();
-  const tokens = tokenizeAll(docs, options.tokenize);
-  const vocabulary = fitVocabulary(tokens, options.tfidf);
-  const x = transformTokens(tokens, vocabulary);
+  const { vocabulary, columnOf } = fitCountVocabulary(m, rowIds, options.tfidf);
+  const x = transformCountRows(m, rowIds, columnOf, vocabulary);
   const t1 = performance.now();
   const classIndex = new Map(classes.map((c, k) => [c, k]));
-  const labelIds = Int32Array.from(docs, (d) => classIndex.get(d.label)!);
+  const labelIds = Int32Array.from(labels, (l) => classIndex.get(l)!);
   const ovr = await trainOneVsRest(x, labelIds, classes.length, options);
   const t2 = performance.now();
   const counts: Record<string, number> = {};
-  for (const d of docs) counts[d.label] = (counts[d.label] ?? 0) + 1;
+  for (const l of labels) counts[l] = (counts[l] ?? 0) + 1;
   return {
     kind: MODEL_KIND,
     formatVersion: MODEL_FORMAT_VERSION,
@@ -132,6 +153,11 @@ export async function trainModel(
 /** Ranks the classes for many documents. */
 export function predictDocuments(model: FoldwrightModel, docs: MlDocument[], whyCount = 5): Prediction[] {
   return predictRows(model, vectoriseDocuments(model, docs), model.options.floor, whyCount);
+}
+
+/** Ranks the classes for documents from their stored term counts (no tokenising). */
+export function predictCounts(model: FoldwrightModel, counts: TermCounts[], whyCount = 5): Prediction[] {
+  return predictRows(model, transformCounts(counts, model.vocabulary), model.options.floor, whyCount);
 }
 
 /** Ranks the classes for one document: suggestion, runner-ups, confidences and why. */

@@ -6,6 +6,14 @@ import winkNLP from "wink-nlp";
 import model from "wink-eng-lite-web-model";
 import type { MlDocument } from "./types";
 
+/**
+ * The version of what tokenizeDocument makes of a document with the default options. Raise it
+ * with ANY change to the tokens (rules, stemming, a new prefixed block such as a heading block):
+ * the app keeps each document's term counts with this number and re-tokenises, in the background,
+ * every document whose counts carry another (lib/data/document-terms.ts).
+ */
+export const TOKENIZER_VERSION = 1;
+
 export interface TokenizeOptions {
   /** Drop wink's stop words (default true). */
   dropStopWords: boolean;

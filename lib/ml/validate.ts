@@ -24,3 +24,13 @@ export function checkTrainingSet(docs: LabelledDocument[]): void {
     throw new Error(`All documents have the label "${docs[0].label}"; training needs at least two different labels.`);
   }
 }
+
+/** Throws unless there is one non-empty label per row and at least two different labels. */
+export function checkLabels(labels: string[], rows: number): void {
+  if (rows === 0) throw new Error("There are no documents to train on.");
+  if (labels.length !== rows) throw new Error(`There are ${rows} documents but ${labels.length} labels; give one label per document.`);
+  labels.forEach((l, i) => {
+    if (typeof l !== "string" || l.trim() === "") throw new Error(`Document ${i + 1} has no label.`);
+  });
+  if (new Set(labels).size < 2) throw new Error(`All documents have the label "${labels[0]}"; training needs at least two different labels.`);
+}
