@@ -61,7 +61,7 @@ describe("holds and disposal in a browser", () => {
     await page.getByTestId("hold-row").filter({ hasText: "REQ-2026-031" }).getByTestId("lift-hold").click();
     await openDialog(page).getByTestId("lift-hold-reason").fill("The lender's review is finished");
     await openDialog(page).getByTestId("confirm").click();
-    await expect.poll(() => page.getByTestId("hold-row").filter({ hasText: "REQ-2026-031" }).count()).toBe(0);
+    await expect.poll(() => page.getByTestId("hold-row").filter({ hasText: "REQ-2026-031" }).count(), { timeout: 15_000 }).toBe(0);
     const events = await owner("hold_events as e").join("legal_holds as h", "h.id", "e.hold_id").where("h.reference", "REQ-2026-031").pluck("e.action");
     expect(events).toEqual(["placed", "released"]);
     await page.context().close();
