@@ -39,6 +39,9 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 120_000,
           hookTimeout: 300_000,
+          // expect.poll waits for the page, not for a speed goal: 1 s (the default) is too short
+          // when a clean-clone run shares two cores with a build (seen on the holds test).
+          expect: { poll: { timeout: 15_000 } },
         },
       },
     ],
