@@ -32,8 +32,25 @@ function bool(name: string, fallback: boolean): boolean {
   return ["1", "true", "yes", "on"].includes(raw.toLowerCase());
 }
 
+function origins(primary: string): string[] {
+  const raw = text("APP_ORIGINS", "");
+  const listed = raw.split(/[\s,]+/).filter(Boolean);
+  // Without APP_ORIGIN the app is local: 127.0.0.1 and localhost on its port are the same machine.
+  const local = process.env.APP_ORIGIN ? [] : [primary.replace("127.0.0.1", "localhost")];
+  return [...new Set([primary, ...local, ...listed].map((o) => {
+    try {
+      const url = new URL(o);
+      if (url.protocol !== "http:" && url.protocol !== "https:") throw new Error();
+      return url.origin;
+    } catch {
+      throw new Error(`APP_ORIGIN or APP_ORIGINS holds "${o}", which is not an origin like https://files.example.com. Fix it in the environment and start again.`);
+    }
+  }))];
+}
+
 const port = int("PORT", 3000);
 const catcherPort = int("MAIL_CATCHER_PORT", 1025);
+const appOrigin = text("APP_ORIGIN", `http://127.0.0.1:${port}`).replace(/\/+$/, "");
 const dataDir = text("FOLDWRIGHT_DATA_DIR", path.join(root, ".data"));
 
 export const env = {
@@ -41,7 +58,9 @@ export const env = {
   production: process.env.NODE_ENV === "production",
   port,
   /** Where people reach the app: the base of links sent by e-mail (invitations, resets). */
-  origin: text("APP_ORIGIN", `http://127.0.0.1:${port}`).replace(/\/+$/, ""),
+  origin: appOrigin,
+  /** Every origin a browser may send writes from: APP_ORIGIN plus the APP_ORIGINS list (the CSRF check). */
+  origins: origins(appOrigin),
   dataDir,
   db: {
     host: text("DATABASE_HOST", "127.0.0.1"),

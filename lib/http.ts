@@ -2,6 +2,7 @@
 import { NextResponse } from "next/server";
 import { ZodError } from "zod";
 import { AppError } from "@/lib/errors";
+import { csrfRefusal } from "@/lib/csrf";
 
 export function errorResponse(status: number, code: string, message: string, headers?: HeadersInit) {
   return NextResponse.json({ error: { code, message } }, { status, headers });
@@ -18,9 +19,15 @@ export function toErrorResponse(e: unknown) {
   return errorResponse(500, "internal", "Something went wrong on our side. Nothing was changed; try again in a moment.");
 }
 
-/** Wraps a route handler so that every thrown error gets the JSON error shape. */
+/**
+ * Wraps a route handler so that every thrown error gets the JSON error shape. Every write
+ * (POST/PUT/PATCH/DELETE) first passes the CSRF check of lib/csrf.ts, or is a 403.
+ */
 export function handle<A extends unknown[]>(fn: (...args: A) => Promise<Response>) {
   return async (...args: A): Promise<Response> => {
+    const request = args[0] as Request | undefined;
+    const refused = typeof request?.headers?.get === "function" ? csrfRefusal(request) : null;
+    if (refused) return errorResponse(403, refused.code, refused.message);
     try {
       return await fn(...args);
     } catch (e) {

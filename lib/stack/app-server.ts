@@ -43,7 +43,8 @@ export interface AppServer {
 export async function serveApp(options: { distDir: string; port: number; dev?: boolean; env?: Record<string, string>; quiet?: boolean }): Promise<AppServer> {
   const child = spawn(process.execPath, [NEXT_BIN(), options.dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(options.port)], {
     cwd: env.root,
-    env: { ...process.env, ...options.env, NEXT_DIST_DIR: options.distDir, NEXT_TELEMETRY_DISABLED: "1" },
+    // PORT too: the app's own origin (APP_ORIGIN's default, the CSRF check) is on the port it serves.
+    env: { ...process.env, PORT: String(options.port), ...options.env, NEXT_DIST_DIR: options.distDir, NEXT_TELEMETRY_DISABLED: "1" },
     stdio: ["ignore", options.quiet ? "ignore" : "inherit", "inherit"],
   });
   const url = `http://127.0.0.1:${options.port}`;

@@ -95,7 +95,7 @@ async function main(): Promise<void> {
   try {
     const signIn = await fetch(`${url}/api/auth/sign-in`, {
       method: "POST",
-      headers: { "content-type": "application/json" },
+      headers: { "content-type": "application/json", origin: url },
       body: JSON.stringify({ email: "clerk@example.com", password: env.demoPassword }),
     });
     const cookie = signIn.headers.getSetCookie()[0].split(";")[0];
@@ -109,7 +109,7 @@ async function main(): Promise<void> {
       const form = new FormData();
       form.append("file", new Blob([new Uint8Array(s.bytes)]), s.name);
       const started = performance.now();
-      const res = await fetch(`${url}/api/documents`, { method: "POST", headers: { cookie }, body: form });
+      const res = await fetch(`${url}/api/documents`, { method: "POST", headers: { cookie, origin: url }, body: form });
       await res.arrayBuffer();
       if (res.status !== 201) throw new Error(`upload ${s.name} answered ${res.status}`);
       latencies.push({ kind: s.kind, ms: performance.now() - started, size: s.bytes.length });

@@ -83,7 +83,7 @@ async function main(): Promise<void> {
     const server = await serveApp({ distDir: ".next", port: env.port, quiet: true, env: { JOBS_ENABLED: "false", DATABASE_NAME: env.db.name } });
     const queueMs: number[] = [];
     try {
-      const res = await fetch(`${server.url}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email: "clerk@example.com", password: env.demoPassword }) });
+      const res = await fetch(`${server.url}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json", origin: server.url }, body: JSON.stringify({ email: "clerk@example.com", password: env.demoPassword }) });
       const cookie = res.headers.getSetCookie()[0].split(";")[0];
       const variants = ["sort=age&dir=asc", "sort=confidence&dir=desc", "sort=cabinet&dir=asc", "sort=age&dir=asc&page=5", "sort=confidence&dir=asc&minConfidence=0.5"];
       for (let i = 0; i < 5; i++) await fetch(`${server.url}/api/review?pageSize=50`, { headers: { cookie } }); // warm-up

@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { ownerDb } from "../helpers/db";
-import { Client, DEMO_PASSWORD } from "./http";
+import { BASE_URL, Client, DEMO_PASSWORD } from "./http";
 
 // Sign-in, sign-out and cookie handling through the real route handlers of the built app.
 const owner = ownerDb();
@@ -38,7 +38,7 @@ describe("sign-in over HTTP", () => {
     const bad = await new Client().request("POST", "/api/auth/sign-in", { email: "not-an-address", password: "x" });
     expect(bad.status).toBe(422);
     expect((await bad.json()).error.code).toBe("bad_input");
-    const res = await fetch(`${(await import("./http")).BASE_URL}/api/auth/sign-in`, { method: "POST", body: "{oops" });
+    const res = await fetch(`${BASE_URL}/api/auth/sign-in`, { method: "POST", headers: { origin: BASE_URL, "content-type": "application/json" }, body: "{oops" });
     expect(res.status).toBe(400);
     expect((await res.json()).error.message).toMatch(/not valid JSON/);
   });

@@ -9,7 +9,8 @@ export class Client {
   cookie = "";
 
   async request(method: string, path: string, body?: unknown): Promise<Response> {
-    const headers: Record<string, string> = {};
+    // A browser names its page's origin on every write (the CSRF check in lib/csrf.ts needs it).
+    const headers: Record<string, string> = { origin: BASE_URL };
     if (this.cookie) headers.cookie = this.cookie;
     let payload: BodyInit | undefined;
     if (body instanceof FormData) payload = body;
