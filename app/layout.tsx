@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { connection } from "next/server";
 import { mono, sans, serif } from "@/app/fonts";
 import "./globals.css";
 
@@ -7,7 +8,9 @@ export const metadata: Metadata = {
   description: "Files the documents of small law and accounting offices.",
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+// Every page renders per request: its scripts carry that request's CSP nonce (proxy.ts).
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  await connection();
   return (
     <html lang="en" className={`${sans.variable} ${serif.variable} ${mono.variable}`}>
       <body className="min-h-screen bg-paper font-sans text-ink antialiased">{children}</body>

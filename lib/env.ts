@@ -61,6 +61,8 @@ export const env = {
   origin: appOrigin,
   /** Every origin a browser may send writes from: APP_ORIGIN plus the APP_ORIGINS list (the CSRF check). */
   origins: origins(appOrigin),
+  /** Served over HTTPS (an https APP_ORIGIN, as in production): HSTS on every answer, Secure cookie. */
+  https: appOrigin.startsWith("https://"),
   dataDir,
   db: {
     host: text("DATABASE_HOST", "127.0.0.1"),
@@ -87,7 +89,8 @@ export const env = {
     secret: text("SESSION_SECRET", ""),
     idleMinutes: int("SESSION_IDLE_MINUTES", 30),
     maxHours: int("SESSION_MAX_HOURS", 12),
-    secureCookie: bool("SESSION_SECURE_COOKIE", false),
+    /** On by default when APP_ORIGIN is https; a local http address keeps it off so sign-in works. */
+    secureCookie: bool("SESSION_SECURE_COOKIE", appOrigin.startsWith("https://")),
   },
   signIn: {
     maxFailures: int("SIGN_IN_MAX_FAILURES", 5),
