@@ -44,4 +44,6 @@ export async function proxy(request: NextRequest) {
   return response;
 }
 
-export const config = { matcher: ["/((?!_next/static|_next/image|favicon.ico).*)"] };
+// Archive imports stream gigabytes: the proxy would copy the request body into memory (and cut
+// it at 10 MB), so /api/imports goes straight to its route, which checks the session itself.
+export const config = { matcher: ["/((?!_next/static|_next/image|favicon.ico|api/imports).*)"] };

@@ -102,6 +102,11 @@ export const env = {
   seedDemoDocuments: bool("SEED_DEMO_DOCUMENTS", true),
   uploadMaxBytes: int("UPLOAD_MAX_BYTES", 50 * 1024 * 1024),
   uploadMaxFiles: int("UPLOAD_MAX_FILES", 50),
+  imports: {
+    // A whole archive (zip or folder) in one import; each file in it keeps UPLOAD_MAX_BYTES.
+    maxBytes: int("IMPORT_MAX_BYTES", 20 * 1024 * 1024 * 1024),
+    maxFiles: int("IMPORT_MAX_FILES", 20_000),
+  },
   read: {
     timeLimitMs: int("READ_TIME_LIMIT_SECONDS", 120) * 1000,
     maxPages: int("READ_MAX_PAGES", 500),

@@ -3,7 +3,7 @@ import type { DocumentSummary } from "@/lib/data/documents";
 import { DisposedBadge, HoldBadge } from "@/components/records/hold-badge";
 import { RetentionWords } from "@/components/records/retention-words";
 
-const HOW: Record<string, string> = { accepted: "Accepted", refiled: "Refiled", by_hand: "Filed by hand", auto: "Auto-filed" };
+const HOW: Record<string, string> = { accepted: "Accepted", refiled: "Refiled", by_hand: "Filed by hand", auto: "Auto-filed", imported: "Imported" };
 
 export function FiledTable({ items }: { items: DocumentSummary[] }) {
   return (

@@ -1,5 +1,5 @@
 // Filing actions in Foldwright's words (DESIGN §3), for the record on every screen.
-export const ACTIONS = ["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved"] as const;
+export const ACTIONS = ["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved", "imported"] as const;
 export type FilingAction = (typeof ACTIONS)[number];
 
 export const ACTION_WORDS: Record<FilingAction, string> = {
@@ -10,6 +10,7 @@ export const ACTION_WORDS: Record<FilingAction, string> = {
   auto_filed: "Auto-filed",
   confirmed: "Confirmed",
   moved: "Moved",
+  imported: "Imported",
 };
 
 /** Records actions (issue 11), not offered as History filters. */

@@ -2,6 +2,7 @@ import "server-only";
 // Intake: keep the original first, then commit the row. Either nothing is left behind, or a
 // complete row whose original is safe in the bucket — never a row without its file.
 import crypto from "node:crypto";
+import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
@@ -73,7 +74,12 @@ function isDuplicateKey(e: unknown): boolean {
   return typeof e === "object" && e !== null && (e as { code?: string }).code === "ER_DUP_ENTRY";
 }
 
-export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uint8Array): Promise<UploadResult> {
+export interface StoreOptions {
+  /** Runs in the row's own transaction (an archive import records which document its file became). */
+  withRow?: (trx: Knex.Transaction, documentId: number) => Promise<void>;
+}
+
+export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uint8Array, options: StoreOptions = {}): Promise<UploadResult> {
   const name = cleanFileName(rawName);
   const sniff = await sniffFile(bytes, name, { maxBytes: env.uploadMaxBytes });
   if (!sniff.ok) return rejected(name, sniff.error);
@@ -111,6 +117,7 @@ export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uin
         uploaded_by: user.id,
       });
       await enqueueJob(READ_JOB, docId, null, trx);
+      await options.withRow?.(trx, docId);
       return docId as number;
     });
     return { name, status: "reading", id, httpStatus: 201 };

@@ -5,6 +5,7 @@ import { completeJob, enqueueJob } from "@/lib/data/jobs";
 import { SUGGEST_JOB } from "@/lib/jobs/kinds";
 import { storeTerms, termsRowOf } from "@/lib/data/document-terms";
 import type { ReadOutcome, SensitiveCounts } from "@/lib/intake";
+import { settleImportedReading } from "@/lib/data/import-settle";
 
 export interface DocumentToRead {
   id: number;
@@ -19,8 +20,9 @@ export async function findDocumentToRead(id: number): Promise<DocumentToRead | u
 }
 
 /**
- * Returns false (and writes nothing) when this worker no longer holds the job. A read text's
- * term counts (lib/data/document-terms.ts) are computed first and stored with it.
+ * Returns false (and writes nothing) when this worker no longer holds the job; otherwise the
+ * import's id when the document came from an archive import (it is filed, not suggested), else
+ * null. A read text's term counts (lib/data/document-terms.ts) are computed first and stored with it.
  */
 export async function saveReading(
   jobId: number,
@@ -28,7 +30,7 @@ export async function saveReading(
   doc: Pick<DocumentToRead, "id" | "original_name" | "media_type">,
   outcome: ReadOutcome,
   counts: SensitiveCounts,
-): Promise<boolean> {
+): Promise<false | { importId: number | null }> {
   const documentId = doc.id;
   const terms =
     outcome.status === "ready"
@@ -54,7 +56,9 @@ export async function saveReading(
         unreadable_reason: null,
       });
       await storeTerms([terms!], trx);
-      await enqueueJob(SUGGEST_JOB, documentId, null, trx);
+      const importId = await settleImportedReading(trx, documentId, { ready: true });
+      if (importId === null) await enqueueJob(SUGGEST_JOB, documentId, null, trx);
+      return { importId };
     } else {
       await trx("documents").where({ id: documentId }).update({
         ...common,
@@ -62,17 +66,20 @@ export async function saveReading(
         unreadable_code: outcome.code,
         unreadable_reason: outcome.reason,
       });
+      return { importId: await settleImportedReading(trx, documentId, { ready: false, code: outcome.code, reason: outcome.reason }) };
     }
-    return true;
   });
 }
 
 /** After every retry failed: the document is marked unreadable; its original stays. */
-export async function markReadingFailed(documentId: number, reason: string): Promise<void> {
-  await getDb()("documents").where({ id: documentId, status: "reading" }).update({
-    status: "unreadable",
-    unreadable_code: "reader_failed",
-    unreadable_reason: reason,
-    read_at: getDb().fn.now(),
+export async function markReadingFailed(documentId: number, reason: string): Promise<number | null> {
+  return getDb().transaction(async (trx) => {
+    await trx("documents").where({ id: documentId, status: "reading" }).update({
+      status: "unreadable",
+      unreadable_code: "reader_failed",
+      unreadable_reason: reason,
+      read_at: trx.fn.now(),
+    });
+    return settleImportedReading(trx, documentId, { ready: false, code: "reader_failed", reason });
   });
 }

@@ -1,6 +1,7 @@
 import "server-only";
-// The training labels: human-confirmed filings only (accepted, refiled, filed by hand, and
-// auto-filed documents once a person confirmed them). Labels are cabinet type ids as strings.
+// The training labels: human-confirmed filings only (accepted, refiled, filed by hand, imported
+// from the office's own filed folders by an admin, and auto-filed documents once a person
+// confirmed them). Labels are cabinet type ids as strings.
 //
 // The set is read from the stored term counts (document_terms, lib/data/document-terms.ts),
 // streamed TRAINING_BATCH rows at a time into one CountMatrix: the texts are neither loaded nor
@@ -20,7 +21,7 @@ export function whereHumanFiled(q: Knex.QueryBuilder): Knex.QueryBuilder {
   return q
     .whereNotNull("filed_at")
     .whereNotNull("cabinet_type_id")
-    .where((w) => w.whereIn("filed_how", ["accepted", "refiled", "by_hand"]).orWhere((a) => a.where("filed_how", "auto").whereNotNull("confirmed_at")));
+    .where((w) => w.whereIn("filed_how", ["accepted", "refiled", "by_hand", "imported"]).orWhere((a) => a.where("filed_how", "auto").whereNotNull("confirmed_at")));
 }
 
 export interface TrainingCounts {

@@ -5,6 +5,7 @@ import { env } from "@/lib/env";
 import { findDocumentToRead, markReadingFailed, saveReading } from "@/lib/data/reading";
 import { getObjectBytes } from "@/storage/s3";
 import type { JobHandler } from "@/lib/jobs/worker";
+import { finishImport } from "@/lib/jobs/import-finish";
 
 export { READ_JOB } from "@/lib/jobs/kinds";
 
@@ -15,14 +16,17 @@ export const readJob: JobHandler = {
     const bytes = await getObjectBytes(doc.storage_key); // storage down → throws → retried later
     const outcome = await readDocument(bytes, doc.media_type, { timeLimitMs: env.read.timeLimitMs, maxPages: env.read.maxPages });
     const counts = outcome.status === "ready" ? countSensitive(outcome.text) : { ssn: 0, routing: 0, card: 0 };
-    await saveReading(job.id, workerId, doc, outcome, counts);
+    const saved = await saveReading(job.id, workerId, doc, outcome, counts);
+    // The reading is saved; an import left unfinished here is finished by its next file or by the import job.
+    if (saved && saved.importId !== null) await finishImport(saved.importId).catch((e) => console.error(`import ${saved.importId}: finishing failed:`, e));
   },
   async giveUp(job) {
     if (job.document_id) {
-      await markReadingFailed(
+      const importId = await markReadingFailed(
         job.document_id,
         "Foldwright could not read this file after several tries. The original is kept: open it to check it, or file it by hand.",
       );
+      if (importId !== null) await finishImport(importId);
     }
   },
 };

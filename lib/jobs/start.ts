@@ -2,13 +2,16 @@
 // one pool for reading and suggesting (JOBS_CONCURRENCY at a time), one for training (one at a
 // time, so a long training never holds up the day's reading), one for mail (sending, password
 // reset requests, scans by e-mail: quick jobs that must not wait behind OCR), the nightly
-// retraining, the daily digest, the SMTP listener for scans by e-mail, and (once at start) the
-// queueing of "tokenize" jobs for documents whose term counts are missing or outdated.
+// retraining, the daily digest, the SMTP listener for scans by e-mail, one pool for archive
+// imports (storing an archive's files one by one while the first pool reads those already
+// stored), and (once at start) the queueing of "tokenize" jobs for documents whose term counts
+// are missing or outdated.
 import { env } from "@/lib/env";
 import { readJob } from "@/lib/jobs/read-job";
-import { MAIL_INTAKE_JOB, MAIL_JOB, READ_JOB, RESET_REQUEST_JOB, SUGGEST_JOB, TOKENIZE_JOB, TRAIN_JOB } from "@/lib/jobs/kinds";
+import { IMPORT_JOB, MAIL_INTAKE_JOB, MAIL_JOB, READ_JOB, RESET_REQUEST_JOB, SUGGEST_JOB, TOKENIZE_JOB, TRAIN_JOB } from "@/lib/jobs/kinds";
 import { tokenizeJob } from "@/lib/jobs/tokenize-job";
 import { queueRetokenizing } from "@/lib/data/document-terms";
+import { importJob } from "@/lib/jobs/import-job";
 import { mailIntakeJob } from "@/lib/jobs/mail-intake-job";
 import { mailJob } from "@/lib/jobs/mail-job";
 import { resetRequestJob } from "@/lib/jobs/reset-request-job";
@@ -22,6 +25,7 @@ interface Background {
   documents: Workers;
   training: Workers;
   mail: Workers;
+  imports: Workers;
   nightly: { stop(): void } | null;
   digest: { stop(): void } | null;
   listener: Promise<IntakeListener | null>;
@@ -63,6 +67,7 @@ export function startBackgroundWork(): Background | undefined {
       pollMs: env.jobs.pollMs,
       leaseSeconds: env.jobs.leaseSeconds,
     }),
+    imports: startWorkers({ handlers: { [IMPORT_JOB]: importJob }, concurrency: 1, pollMs: env.jobs.pollMs, leaseSeconds: env.jobs.leaseSeconds }),
     nightly: scheduleNightlyRetrain(),
     digest: scheduleDailyDigest(),
     listener: listenForScans(),
@@ -80,5 +85,5 @@ export async function stopBackgroundWork(): Promise<void> {
   bg?.nightly?.stop();
   bg?.digest?.stop();
   await (await bg?.listener)?.stop();
-  await Promise.all([bg?.documents.stop(), bg?.training.stop(), bg?.mail.stop()]);
+  await Promise.all([bg?.documents.stop(), bg?.training.stop(), bg?.mail.stop(), bg?.imports.stop()]);
 }

@@ -26,7 +26,7 @@ export const queueSchema = z.object({
 });
 
 export const eventsSchema = z.object({
-  action: z.enum(["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved"]).optional(),
+  action: z.enum(["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved", "imported"]).optional(),
   document: z.coerce.number().int().positive().optional(),
   from: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "from must be a date like 2026-12-01.").optional(),
   to: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "to must be a date like 2026-12-01.").optional(),

@@ -109,6 +109,12 @@ const MATRIX: Row[] = [
   { method: "POST", path: "/api/senders", file: "api/senders/route.ts", body: {}, expect: { ...all(403, 401), admin: 422 } },
   { method: "DELETE", path: "/api/senders/999999", file: "api/senders/[id]/route.ts", expect: { ...all(403, 401), admin: 404 } },
   { method: "GET", path: "/api/outbox", file: "api/outbox/route.ts", expect: { ...all(403, 401), admin: 200 } },
+  // Archive imports (admins): an upload whose only file is empty is not a zip (422).
+  { method: "POST", path: "/api/imports", file: "api/imports/route.ts", body: "empty-file", expect: { ...all(403, 401), admin: 422 } },
+  { method: "GET", path: "/api/imports/999999", file: "api/imports/[id]/route.ts", expect: { ...all(403, 401), admin: 404 } },
+  { method: "POST", path: "/api/imports/999999/confirm", file: "api/imports/[id]/confirm/route.ts", body: {}, expect: { ...all(403, 401), admin: 422 } },
+  { method: "GET", path: "/setup/import", file: "(app)/setup/import/page.tsx", expect: page(["admin"]) },
+  { method: "GET", path: "/setup/import/999999", file: "(app)/setup/import/[id]/page.tsx", expect: { ...page(["admin"]), admin: 404 } },
   { method: "GET", path: "/setup/people", file: "(app)/setup/people/page.tsx", expect: page(["admin"]) },
   { method: "GET", path: "/setup/senders", file: "(app)/setup/senders/page.tsx", expect: page(["admin"]) },
   { method: "GET", path: "/setup/outbox", file: "(app)/setup/outbox/page.tsx", expect: page(["admin"]) },

@@ -14,6 +14,18 @@ interface ZipPart {
   compressed: Uint8Array;
   /** What the central directory will claim; honest unless a test says otherwise. */
   declaredSize: number;
+  /** Marks the entry encrypted (general purpose bit 0, APPNOTE 4.4.4) without encrypting it. */
+  encrypted?: boolean;
+}
+
+/** An honest deflated part holding `data`. */
+export function makePart(name: string, data: Uint8Array): ZipPart {
+  return { name, crc: crc32(data), compressed: deflateRawSync(data), declaredSize: data.length };
+}
+
+/** A zip of the given parts, in order (an archive to import, say). */
+export function makeZip(parts: ZipPart[]): Uint8Array {
+  return writeZip(parts);
 }
 
 /** Re-packs a real .docx and adds `extra` parts after its own, as a zip with deflated entries. */
@@ -68,7 +80,8 @@ function writeZip(parts: ZipPart[]): Uint8Array {
     const local = Buffer.alloc(30);
     local.writeUInt32LE(0x04034b50, 0);
     local.writeUInt16LE(20, 4);
-    local.writeUInt16LE(0x0800, 6); // UTF-8 names
+    const flags = 0x0800 | (part.encrypted ? 0x0001 : 0); // UTF-8 names; bit 0: encrypted
+    local.writeUInt16LE(flags, 6);
     local.writeUInt16LE(8, 8); // deflate
     local.writeUInt32LE(part.crc, 14);
     local.writeUInt32LE(part.compressed.length, 18);
@@ -78,7 +91,7 @@ function writeZip(parts: ZipPart[]): Uint8Array {
     central.writeUInt32LE(0x02014b50, 0);
     central.writeUInt16LE(20, 4);
     central.writeUInt16LE(20, 6);
-    central.writeUInt16LE(0x0800, 8);
+    central.writeUInt16LE(flags, 8);
     central.writeUInt16LE(8, 10);
     central.writeUInt32LE(part.crc, 16);
     central.writeUInt32LE(part.compressed.length, 20);
