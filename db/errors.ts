@@ -2,7 +2,8 @@
 // (a bug or bad data: 500, logged with its cause). The codes are mysql2's and Node's network
 // errors, and Knex's own pool time-out; MariaDB server error numbers from its error reference
 // (1040 too many connections, 1053 shutdown in progress, 2002/2003/2006/2013 client-side
-// connection losses).
+// connection losses, 1969 max_statement_time reached, 1205 a row lock not granted in time: the
+// server is too slow or too busy to answer now, which is "try again", not a bug).
 const UNAVAILABLE_CODES = new Set([
   "ECONNREFUSED",
   "ECONNRESET",
@@ -19,6 +20,8 @@ const UNAVAILABLE_CODES = new Set([
   "CR_SERVER_LOST",
   "CR_CONNECTION_ERROR",
   "CR_CONN_HOST_ERROR",
+  "ER_STATEMENT_TIMEOUT",
+  "ER_LOCK_WAIT_TIMEOUT",
 ]);
 
 export function isDatabaseUnavailable(e: unknown): boolean {

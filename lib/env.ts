@@ -73,6 +73,15 @@ export const env = {
     adminUser: text("DATABASE_ADMIN_USER", "root"),
     adminPassword: text("DATABASE_ADMIN_PASSWORD", ""),
     poolMax: int("DATABASE_POOL_MAX", 10),
+    /** A new connection's TCP connect and handshake (a frozen server accepts the TCP connection and never answers). */
+    connectTimeoutMs: int("DATABASE_CONNECT_TIMEOUT_MS", 5000),
+    /** Waiting for a free pooled connection (Knex's acquireConnectionTimeout). */
+    acquireTimeoutMs: int("DATABASE_ACQUIRE_TIMEOUT_MS", 5000),
+    /**
+     * One statement of the app: the client gives up after this (mysql2's per-query timeout) and
+     * the server aborts it too (MariaDB's max_statement_time, whole seconds). 0 turns both off.
+     */
+    queryTimeoutMs: int("DATABASE_QUERY_TIMEOUT_MS", 20_000),
     /** Start a private mariadbd under .data/ when nothing answers (local machines only). */
     startLocal: bool("DATABASE_START_LOCAL", true),
   },
@@ -84,6 +93,9 @@ export const env = {
     secretAccessKey: text("S3_SECRET_ACCESS_KEY", "S3RVER"),
     forcePathStyle: bool("S3_FORCE_PATH_STYLE", true),
     startLocal: bool("S3_START_LOCAL", true),
+    /** Opening a connection to the store, and the longest silence on one (not a whole transfer's time). */
+    connectTimeoutMs: int("S3_CONNECT_TIMEOUT_MS", 5000),
+    requestTimeoutMs: int("S3_REQUEST_TIMEOUT_MS", 30_000),
   },
   session: {
     secret: text("SESSION_SECRET", ""),

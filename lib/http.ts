@@ -3,6 +3,11 @@ import { NextResponse } from "next/server";
 import { ZodError } from "zod";
 import { AppError } from "@/lib/errors";
 import { csrfRefusal } from "@/lib/csrf";
+import { isDatabaseUnavailable } from "@/db/errors";
+import { UNAVAILABLE_CODE, UNAVAILABLE_SENTENCE, unavailableService } from "@/lib/unavailable";
+
+// The 503 sentences say "try again in a minute"; clients that read Retry-After wait half that.
+export const RETRY_AFTER_SECONDS = 30;
 
 export function errorResponse(status: number, code: string, message: string, headers?: HeadersInit) {
   return NextResponse.json({ error: { code, message } }, { status, headers });
@@ -14,6 +19,11 @@ export function toErrorResponse(e: unknown) {
     const first = e.issues[0];
     const where = first?.path.length ? `${first.path.join(".")}: ` : "";
     return errorResponse(422, "bad_input", `${where}${first?.message ?? "The request is not valid."}`);
+  }
+  const service = unavailableService(e) ?? (isDatabaseUnavailable(e) ? "database" : null);
+  if (service) {
+    console.error(`${service} not answering (503):`, e);
+    return errorResponse(503, UNAVAILABLE_CODE[service], UNAVAILABLE_SENTENCE[service], { "Retry-After": String(RETRY_AFTER_SECONDS) });
   }
   console.error(e);
   return errorResponse(500, "internal", "Something went wrong on our side. Nothing was changed; try again in a moment.");

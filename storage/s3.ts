@@ -11,6 +11,7 @@ import {
 } from "@aws-sdk/client-s3";
 import type { Readable } from "node:stream";
 import { env } from "@/lib/env";
+import { markUnavailable } from "@/lib/unavailable";
 
 const globalForS3 = globalThis as unknown as { foldwrightS3?: S3Client };
 
@@ -26,7 +27,21 @@ export function getS3(): S3Client {
       requestChecksumCalculation: "WHEN_REQUIRED",
       responseChecksumValidation: "WHEN_REQUIRED",
       maxAttempts: 2,
+      // Without limits a store that accepts the connection and never answers holds a request forever.
+      requestHandler: { connectionTimeout: env.s3.connectTimeoutMs, requestTimeout: env.s3.requestTimeoutMs },
     });
+    // Marks "the store is not answering" on the error itself, so every caller's error answers 503
+    // with a sentence (lib/http.ts, the page error boundaries) without checking it again.
+    globalForS3.foldwrightS3.middlewareStack.add(
+      (next) => async (args) => {
+        try {
+          return await next(args);
+        } catch (e) {
+          throw isStorageUnavailable(e) ? markUnavailable(e, "storage") : e;
+        }
+      },
+      { step: "initialize", name: "foldwrightMarkUnavailable" },
+    );
   }
   return globalForS3.foldwrightS3;
 }
