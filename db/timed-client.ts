@@ -7,7 +7,7 @@
 // server that is alive but slow. Errors that mean "the database is not answering" (a connection
 // refused, lost or timed out, no pooled connection in time) are marked for the 503 answer.
 import type { Knex } from "knex";
-import ClientMySQL2 from "knex/lib/dialects/mysql2";
+import ClientMySQL2 from "knex/lib/dialects/mysql2/index.js";
 import { isDatabaseUnavailable } from "@/db/errors";
 import { markUnavailable } from "@/lib/unavailable";
 
