@@ -5,7 +5,7 @@ import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { maskSensitive } from "@/lib/intake";
 import { AppError, notFound } from "@/lib/errors";
-import { documentsWithMatters, walledDocumentSql, whereDocumentVisible } from "@/lib/data/document-access";
+import { documentsWithMatters, findWalledMatters, walledDocumentSql, whereDocumentVisible, type WalledMatters } from "@/lib/data/document-access";
 import type { CurrentUser } from "@/lib/data/users";
 import { dueOnSql, heldSql } from "@/lib/data/retention-sql";
 import { addDays, describeRule, DUE_SOON_DAYS, retentionDate, utcDay, type RetentionBasis, type RetentionTrigger } from "@/lib/records/retention-date";
@@ -127,8 +127,8 @@ function documentsWithNames(db: Knex) {
     .leftJoin("cabinet_types as c", "c.id", "d.cabinet_type_id");
 }
 
-function visibleDocuments(user: CurrentUser) {
-  return whereDocumentVisible(documentsWithNames(getDb()), user);
+function visibleDocuments(user: CurrentUser, walled?: WalledMatters) {
+  return whereDocumentVisible(documentsWithNames(getDb()), user, "d", walled);
 }
 
 /**
@@ -196,7 +196,7 @@ function keepsOwnStubs(f: DocumentFilters): boolean {
 
 export async function listDocuments(user: CurrentUser, f: DocumentFilters): Promise<{ items: DocumentSummary[]; total: number }> {
   if (keepsOwnStubs(f)) return listOwnUploads(user, f);
-  const base = visibleDocuments(user);
+  const base = visibleDocuments(user, await findWalledMatters(user));
   if (f.status) base.where("d.status", f.status);
   if (f.uploadedByMe) base.where("d.uploaded_by", user.id);
   if (f.ids?.length) base.whereIn("d.id", f.ids);
@@ -267,7 +267,7 @@ export async function listCabinets(user: CurrentUser): Promise<CabinetCount[]> {
     .count({ n: "d.id" })
     .max({ last: "d.filed_at" })
     .orderBy([{ column: "m.number" }, { column: "c.name" }]);
-  const rows = await whereDocumentVisible(q, user);
+  const rows = await whereDocumentVisible(q, user, "d", await findWalledMatters(user));
   return rows.map((r: Record<string, unknown>) => ({
     matterId: Number(r.matter_id),
     matter: String(r.number),

@@ -3,7 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { listCabinetTypes, listVisibleMatters } from "@/lib/data/catalog";
-import { canSeeDocument, whereDocumentVisible } from "@/lib/data/document-access";
+import { canSeeDocument, findWalledMatters, whereDocumentVisible, type WalledMatters } from "@/lib/data/document-access";
 import { loadNameHistory, nameAt } from "@/lib/data/historic-names";
 import { notFound } from "@/lib/errors";
 import type { CurrentUser } from "@/lib/data/users";
@@ -99,13 +99,18 @@ export interface EventFilters {
 }
 
 /** The audit list; events of documents behind an ethical wall only for that team and admins. */
-export async function listFilingEvents(user: CurrentUser, f: EventFilters): Promise<{ items: FilingEvent[]; total: number }> {
-  const db = getDb();
-  const q = whereDocumentVisible(events(db), user);
+function filteredEvents(db: Knex, user: CurrentUser, f: Omit<EventFilters, "page" | "pageSize">, walled: WalledMatters) {
+  const q = whereDocumentVisible(events(db), user, "d", walled);
   if (f.action) q.where("e.action", f.action);
   if (f.documentId) q.where("e.document_id", f.documentId);
   if (f.from) q.where("e.created_at", ">=", f.from);
   if (f.to) q.where("e.created_at", "<", f.to);
+  return q;
+}
+
+export async function listFilingEvents(user: CurrentUser, f: EventFilters): Promise<{ items: FilingEvent[]; total: number }> {
+  const db = getDb();
+  const q = filteredEvents(db, user, f, await findWalledMatters(user));
   const [{ total }] = await q.clone().clearSelect().count({ total: "e.id" });
   const rows = await q.orderBy("e.id", "desc").limit(f.pageSize).offset((f.page - 1) * f.pageSize);
   return { items: await withHistoricNames(db, rows), total: Number(total) };
@@ -152,15 +157,56 @@ export async function getLatestSuggestion(user: CurrentUser, documentId: number)
  * that starts like a formula (=, +, -, @) gets a leading apostrophe so a spreadsheet shows it
  * as text (common practice against CSV injection).
  */
+const CSV_HEAD = ["id", "at", "document_id", "document", "action", "user", "from_cabinet_type", "to_cabinet_type", "from_matter", "to_matter", "model_version", "confidence", "reason"];
+
+function csvCell(v: unknown): string {
+  let s = v === null || v === undefined ? "" : String(v);
+  if (/^[=+\-@]/.test(s)) s = `'${s}`;
+  return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+function csvLines(items: FilingEvent[]): string {
+  return items
+    .map((e) => [e.id, e.at, e.documentId, e.documentName, e.action, e.user ?? "Foldwright", e.fromCabinetType, e.toCabinetType, e.fromMatter, e.toMatter, e.modelVersionId, e.confidence, e.reason].map(csvCell).join(",") + "\r\n")
+    .join("");
+}
+
 export function toCsv(items: FilingEvent[]): string {
-  const head = ["id", "at", "document_id", "document", "action", "user", "from_cabinet_type", "to_cabinet_type", "from_matter", "to_matter", "model_version", "confidence", "reason"];
-  const cell = (v: unknown) => {
-    let s = v === null || v === undefined ? "" : String(v);
-    if (/^[=+\-@]/.test(s)) s = `'${s}`;
-    return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-  };
-  const lines = items.map((e) =>
-    [e.id, e.at, e.documentId, e.documentName, e.action, e.user ?? "Foldwright", e.fromCabinetType, e.toCabinetType, e.fromMatter, e.toMatter, e.modelVersionId, e.confidence, e.reason].map(cell).join(","),
-  );
-  return [head.join(","), ...lines].join("\r\n") + "\r\n";
+  return CSV_HEAD.join(",") + "\r\n" + csvLines(items);
+}
+
+/** Events per database round trip of the streamed export. */
+export const CSV_BATCH = 1_000;
+
+/**
+ * Every event the filters match, newest first, as CSV streamed a batch at a time: keyset pages on
+ * the primary key (`e.id < last`), so memory stays one batch however long the record is, and
+ * the wall and historic names apply as in the list.
+ */
+export function streamFilingEventsCsv(user: CurrentUser, f: Omit<EventFilters, "page" | "pageSize">): ReadableStream<Uint8Array> {
+  const db = getDb();
+  const encoder = new TextEncoder();
+  let last: number | null = null;
+  let started = false;
+  let walled: WalledMatters | null = null;
+  return new ReadableStream<Uint8Array>({
+    async pull(controller) {
+      if (!started) {
+        started = true;
+        controller.enqueue(encoder.encode(CSV_HEAD.join(",") + "\r\n"));
+        return;
+      }
+      // The wall as it stands when the export starts, for the whole file.
+      walled ??= await findWalledMatters(user);
+      const q = filteredEvents(db, user, f, walled);
+      if (last !== null) q.where("e.id", "<", last);
+      const rows = await q.orderBy("e.id", "desc").limit(CSV_BATCH);
+      if (rows.length === 0) {
+        controller.close();
+        return;
+      }
+      last = Number(rows[rows.length - 1].id);
+      controller.enqueue(encoder.encode(csvLines(await withHistoricNames(db, rows))));
+    },
+  });
 }

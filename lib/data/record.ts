@@ -71,3 +71,33 @@ export async function appendFilingEvent(db: Knex | Knex.Transaction, e: NewFilin
   });
   return Number(id);
 }
+
+/**
+ * Many events at once (bulk writers such as the scale benchmark's filing of generated documents):
+ * the same checks and links as appendFilingEvent, in two multi-row inserts.
+ */
+export async function appendFilingEvents(db: Knex | Knex.Transaction, events: NewFilingEvent[]): Promise<void> {
+  if (events.length === 0) return;
+  const links: { document_id: number; matter_id: number; how: LinkHow }[] = [];
+  for (const e of events) {
+    if (!FILING_ACTIONS.includes(e.action)) throw new Error(`Unknown filing action "${e.action}".`);
+    const how = LINK_OF[e.action] ?? "filed";
+    for (const m of [e.fromMatterId, e.toMatterId]) if (m && Number.isInteger(m) && m > 0) links.push({ document_id: e.documentId, matter_id: m, how });
+  }
+  if (links.length) await db("document_matter_links").insert(links).onConflict(["document_id", "matter_id"]).ignore();
+  await db("filing_events").insert(
+    events.map((e) => ({
+      document_id: e.documentId,
+      user_id: e.userId,
+      action: e.action,
+      from_cabinet_type_id: e.fromCabinetTypeId ?? null,
+      to_cabinet_type_id: e.toCabinetTypeId ?? null,
+      from_matter_id: e.fromMatterId ?? null,
+      to_matter_id: e.toMatterId ?? null,
+      model_version_id: e.modelVersionId ?? null,
+      confidence: e.confidence ?? null,
+      reason: e.reason ? e.reason.slice(0, REASON_MAX) : null,
+      ...(e.createdAt ? { created_at: e.createdAt } : {}),
+    })),
+  );
+}

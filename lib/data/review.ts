@@ -2,7 +2,7 @@ import "server-only";
 // The To review queue (read, not filed) and the spot-check list (auto-filed, not yet confirmed).
 import type { Knex } from "knex";
 import { getDb } from "@/db";
-import { whereDocumentVisible } from "@/lib/data/document-access";
+import { findWalledMatters, whereDocumentVisible, type WalledMatters } from "@/lib/data/document-access";
 import { heldSql } from "@/lib/data/retention-sql";
 import type { CurrentUser } from "@/lib/data/users";
 
@@ -44,13 +44,13 @@ export interface QueueItem {
 
 const SORTS: Record<QueueFilters["sort"], string> = { age: "d.uploaded_at", confidence: "s.top_confidence", cabinet: "ct.name", matter: "sm.number" };
 
-function baseQuery(db: Knex, user: CurrentUser, f: QueueFilters) {
+function baseQuery(db: Knex, user: CurrentUser, f: QueueFilters, walled: WalledMatters) {
   const q = db("documents as d")
     .leftJoin("matters as m", "m.id", "d.matter_id")
     .leftJoin("suggestions as s", "s.id", db.raw("(SELECT MAX(x.id) FROM suggestions x WHERE x.document_id = d.id)"))
     .leftJoin("cabinet_types as ct", "ct.id", "s.top_cabinet_type_id")
     .leftJoin("matters as sm", "sm.id", "s.top_matter_id");
-  whereDocumentVisible(q, user);
+  whereDocumentVisible(q, user, "d", walled);
   if (f.list === "review") {
     q.whereNull("d.filed_at").where((w) => w.where("d.status", "unreadable").orWhere((r) => r.where("d.status", "ready").whereNotNull("s.id")));
   } else {
@@ -65,8 +65,9 @@ function baseQuery(db: Knex, user: CurrentUser, f: QueueFilters) {
 
 export async function listQueue(user: CurrentUser, f: QueueFilters): Promise<{ items: QueueItem[]; total: number }> {
   const db = getDb();
-  const [{ total }] = await baseQuery(db, user, f).count({ total: "d.id" });
-  const rows = await baseQuery(db, user, f)
+  const walled = await findWalledMatters(user);
+  const [{ total }] = await baseQuery(db, user, f, walled).count({ total: "d.id" });
+  const rows = await baseQuery(db, user, f, walled)
     .leftJoin("cabinet_types as fct", "fct.id", "d.cabinet_type_id")
     .select(
       "d.id", "d.original_name", "d.status", "d.unreadable_reason", "d.uploaded_at", "d.page_count", "d.ocr_used", "d.filed_how",
