@@ -121,6 +121,7 @@ export const env = {
   },
   read: {
     timeLimitMs: int("READ_TIME_LIMIT_SECONDS", 120) * 1000,
+    pageTimeLimitMs: int("READ_PAGE_TIME_LIMIT_SECONDS", 60) * 1000,
     maxPages: int("READ_MAX_PAGES", 500),
   },
   retrain: {

@@ -7,7 +7,7 @@ import { describeTimeLimit, UnreadableError } from "./unreadable";
  * worker thread when it needs a hard stop.
  */
 export class Deadline {
-  private readonly endsAt: number;
+  private endsAt: number;
 
   constructor(readonly limitMs: number) {
     this.endsAt = performance.now() + limitMs;
@@ -15,6 +15,11 @@ export class Deadline {
 
   remainingMs(): number {
     return Math.max(0, this.endsAt - performance.now());
+  }
+
+  /** Gives back time spent on work that has a budget of its own (an OCR'd page of a PDF). */
+  extend(ms: number): void {
+    this.endsAt += Math.max(0, ms);
   }
 
   /** Throws the Unreadable "time limit" error once the budget is spent. */

@@ -1,13 +1,16 @@
+import os from "node:os";
 import { createWorker, type Worker } from "tesseract.js";
 import type { Worker as ThreadWorker } from "node:worker_threads";
 import type { Deadline } from "./deadline";
 import { resolveOcrLanguagePath } from "./ocr-language";
 
-// One tesseract worker per process, used by one page at a time: OCR is CPU-bound, so a second
-// worker on the same cores would only split the time. The reading jobs bound how many files
-// are read at once; this module bounds the OCR underneath them.
+// A small pool of tesseract workers per process, each reading one page at a time. OCR is
+// CPU-bound, so the pool has one worker per core (at most OCR_MAX_WORKERS): the pages of one long
+// scan are spread over them, and a second worker on a single core would only split the time.
+// The reading jobs bound how many files are read at once; this module bounds the OCR underneath.
 const RECYCLE_AFTER_PAGES = 100; // tesseract.js workers grow in memory over long runs
-const IDLE_SHUTDOWN_MS = 60_000; // frees ~100 MB when no scans arrive, and lets scripts exit
+const IDLE_SHUTDOWN_MS = 60_000; // frees ~100 MB a worker when no scans arrive, and lets scripts exit
+const OCR_MAX_WORKERS = 2; // ~100 MB each; two cores is the machine this is sized for
 
 interface Engine {
   worker: Worker;
@@ -15,33 +18,51 @@ interface Engine {
   pages: number;
 }
 
-let engine: Promise<Engine> | null = null;
-let queue: Promise<unknown> = Promise.resolve();
-let idleTimer: NodeJS.Timeout | undefined;
+interface Slot {
+  engine: Promise<Engine> | null;
+  queue: Promise<unknown>;
+  waiting: number;
+  idleTimer?: NodeJS.Timeout;
+}
 
-/** OCRs one PNG/JPEG/TIFF image within the deadline; the time spent waiting for the worker counts. */
+let slots: Slot[] = [];
+
+/** How many pages can be OCR'd at once in this process. */
+export function ocrWorkerCount(): number {
+  return Math.max(1, Math.min(OCR_MAX_WORKERS, os.availableParallelism()));
+}
+
+function pickSlot(): Slot {
+  if (slots.length === 0) slots = Array.from({ length: ocrWorkerCount() }, () => ({ engine: null, queue: Promise.resolve(), waiting: 0 }));
+  return slots.reduce((best, s) => (s.waiting < best.waiting ? s : best));
+}
+
+/** OCRs one PNG/JPEG/TIFF image within the deadline; the time spent waiting for a worker counts. */
 export function recognizeImage(image: Uint8Array, deadline: Deadline): Promise<string> {
+  const slot = pickSlot();
   const state = { running: false };
-  const job = queue.then(() => runRecognition(image, deadline, state));
-  queue = job.catch(() => undefined);
+  slot.waiting += 1;
+  const job = slot.queue.then(() => runRecognition(slot, image, deadline, state)).finally(() => (slot.waiting -= 1));
+  slot.queue = job.catch(() => undefined);
   // Stop the worker only if this page is on it: a page still waiting its turn must not kill
-  // another file's OCR; it gives up by itself when its turn comes (`deadline.check()`).
+  // another page's OCR; it gives up by itself when its turn comes (`deadline.check()`).
   return deadline.race(job, () => {
-    if (state.running) void discardEngine();
+    if (state.running) void discardEngine(slot);
   });
 }
 
-/** Stops the OCR worker; call on server shutdown and at the end of scripts and test files. */
+/** Stops the OCR workers; call on server shutdown and at the end of scripts and test files. */
 export async function shutdownOcr(): Promise<void> {
-  clearTimeout(idleTimer);
-  await discardEngine();
+  const all = slots;
+  slots = [];
+  await Promise.all(all.map((s) => (clearTimeout(s.idleTimer), discardEngine(s))));
 }
 
-async function runRecognition(image: Uint8Array, deadline: Deadline, state: { running: boolean }): Promise<string> {
+async function runRecognition(slot: Slot, image: Uint8Array, deadline: Deadline, state: { running: boolean }): Promise<string> {
   deadline.check(); // the budget may have run out while this page waited its turn
-  clearTimeout(idleTimer);
+  clearTimeout(slot.idleTimer);
   state.running = true;
-  const current = await obtainEngine();
+  const current = await obtainEngine(slot);
   try {
     // Copy: tesseract.js transfers the buffer to its thread, and the caller may still need it.
     const result = await Promise.race([current.worker.recognize(Buffer.from(image)), current.crashed]);
@@ -49,17 +70,17 @@ async function runRecognition(image: Uint8Array, deadline: Deadline, state: { ru
   } finally {
     state.running = false;
     current.pages += 1;
-    if (current.pages >= RECYCLE_AFTER_PAGES) await discardEngine(current);
-    idleTimer = setTimeout(() => void discardEngine(), IDLE_SHUTDOWN_MS).unref();
+    if (current.pages >= RECYCLE_AFTER_PAGES) await discardEngine(slot, current);
+    slot.idleTimer = setTimeout(() => void discardEngine(slot), IDLE_SHUTDOWN_MS).unref();
   }
 }
 
-function obtainEngine(): Promise<Engine> {
-  engine ??= startEngine().catch((error: unknown) => {
-    engine = null;
+function obtainEngine(slot: Slot): Promise<Engine> {
+  slot.engine ??= startEngine().catch((error: unknown) => {
+    slot.engine = null;
     throw error;
   });
-  return engine;
+  return slot.engine;
 }
 
 async function startEngine(): Promise<Engine> {
@@ -80,13 +101,13 @@ async function startEngine(): Promise<Engine> {
   return { worker, crashed, pages: 0 };
 }
 
-/** Stops the current engine, or only `expected` if that is still the current one. */
-async function discardEngine(expected?: Engine): Promise<void> {
-  const pending = engine;
+/** Stops the slot's engine, or only `expected` if that is still the slot's one. */
+async function discardEngine(slot: Slot, expected?: Engine): Promise<void> {
+  const pending = slot.engine;
   if (!pending) return;
   const current = await pending.catch(() => null);
   if (expected && current !== expected) return;
-  if (engine === pending) engine = null;
+  if (slot.engine === pending) slot.engine = null;
   try {
     await current?.worker.terminate();
   } catch {

@@ -3,7 +3,7 @@ import { findKindByMediaType } from "./file-kinds";
 import { readDocx } from "./read-docx";
 import { readImage } from "./read-image";
 import { resolveReadOptions } from "./read-options";
-import { readPdf } from "./read-pdf";
+import { readPdf, type PageProgress } from "./read-pdf";
 import type { FileKind, ReadOptions, ReadOutcome } from "./types";
 import { describeReaderFailure, describeUnsupported, UnreadableError } from "./unreadable";
 
@@ -22,13 +22,14 @@ export async function readDocument(
   bytes: Uint8Array,
   mediaType: string,
   options: Partial<ReadOptions> = {},
+  onPage?: PageProgress,
 ): Promise<ReadOutcome> {
   const started = performance.now();
   const limits = resolveReadOptions(options);
   const kind = findKindByMediaType(mediaType);
   if (!kind) return new UnreadableError("unsupported_type", describeUnsupported(mediaType)).toOutcome();
   try {
-    const read = await readKind(kind, bytes, limits, new Deadline(limits.timeLimitMs));
+    const read = await readKind(kind, bytes, limits, new Deadline(limits.timeLimitMs), onPage);
     const text = tidyText(read.text);
     return {
       status: "ready",
@@ -45,10 +46,10 @@ export async function readDocument(
   }
 }
 
-async function readKind(kind: FileKind, bytes: Uint8Array, limits: ReadOptions, deadline: Deadline): Promise<KindText> {
+async function readKind(kind: FileKind, bytes: Uint8Array, limits: ReadOptions, deadline: Deadline, onPage?: PageProgress): Promise<KindText> {
   switch (kind) {
     case "pdf":
-      return readPdf(bytes, limits, deadline);
+      return readPdf(bytes, limits, deadline, onPage);
     case "docx":
       return { ...(await readDocx(bytes, limits, deadline)), ocrPages: 0 };
     case "png":

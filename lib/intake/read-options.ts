@@ -6,6 +6,8 @@ const MB = 1024 * 1024;
 // genuine .docx rarely unpacks past a few tens of MB even with photos inside.
 export const DEFAULT_READ_OPTIONS: Readonly<ReadOptions> = Object.freeze({
   timeLimitMs: 120_000,
+  pageTimeLimitMs: 60_000, // a dense page takes 2.5 s on one core (bench:intake); 60 s allows a loaded machine
+  maxOcrPixels: 16_000_000, // a US-letter page at 450 dpi is 16.2 M pixels; 300 dpi scans (8.4 M) fit whole
   maxPages: 500,
   minLettersPerPage: 20,
   ocrScale: 2,

@@ -17,13 +17,17 @@ export type SniffResult =
 
 /** Limits for one reading. Every field has a default in `read-options.ts`. */
 export interface ReadOptions {
-  /** Wall-clock budget for the whole file, OCR included. */
+  /** Wall-clock budget for the whole file; an OCR'd PDF page counts against its own budget instead. */
   timeLimitMs: number;
+  /** Wall-clock budget for one OCR'd PDF page (rendering and recognition), so a long scan reads in full. */
+  pageTimeLimitMs: number;
+  /** A scanned page is rendered at its image's own pixel size, but never past this many pixels. */
+  maxOcrPixels: number;
   /** A PDF with more pages than this is Unreadable rather than read in part. */
   maxPages: number;
   /** A PDF page whose text layer has fewer letters than this is rendered and OCR'd. */
   minLettersPerPage: number;
-  /** Render scale for OCR of PDF pages; 2 (about 144 dpi) is what tesseract reads well. */
+  /** Render scale for OCR of PDF pages without a page-sized image; 2 (about 144 dpi) is what tesseract reads well. */
   ocrScale: number;
   /** DOCX: the central directory may declare at most this many unpacked bytes in total. */
   maxUnzippedBytes: number;

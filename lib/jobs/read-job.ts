@@ -14,7 +14,7 @@ export const readJob: JobHandler = {
     const doc = await findDocumentToRead(job.document_id!);
     if (!doc) throw new Error(`document ${job.document_id} is gone`);
     const bytes = await getObjectBytes(doc.storage_key); // storage down → throws → retried later
-    const outcome = await readDocument(bytes, doc.media_type, { timeLimitMs: env.read.timeLimitMs, maxPages: env.read.maxPages });
+    const outcome = await readDocument(bytes, doc.media_type, { timeLimitMs: env.read.timeLimitMs, pageTimeLimitMs: env.read.pageTimeLimitMs, maxPages: env.read.maxPages });
     const counts = outcome.status === "ready" ? countSensitive(outcome.text) : { ssn: 0, routing: 0, card: 0 };
     const saved = await saveReading(job.id, workerId, doc, outcome, counts);
     // The reading is saved; an import left unfinished here is finished by its next file or by the import job.

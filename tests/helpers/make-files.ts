@@ -37,6 +37,33 @@ export async function makeImagePdf(pngPages: Uint8Array[]): Promise<Uint8Array> 
   return pdf.save();
 }
 
+/**
+ * A "scan" PDF whose page is sized from the image and a declared resolution: at 72 dpi a
+ * 1700 × 2200 pixel scan becomes a 23.6 × 30.6 inch page (what many phone apps and image-to-PDF
+ * tools write), at 300 dpi a 5.7 × 7.3 inch one. The pixels are the same in both.
+ */
+export async function makeScanPdf(png: Uint8Array, size: { width: number; height: number }, dpi: number): Promise<Uint8Array> {
+  const pdf = await PDFDocument.create();
+  const image = await pdf.embedPng(png);
+  const page = pdf.addPage([(size.width * 72) / dpi, (size.height * 72) / dpi]);
+  page.drawImage(image, { x: 0, y: 0, width: page.getWidth(), height: page.getHeight() });
+  return pdf.save();
+}
+
+/** A page of text like a 200 dpi scan of a US-letter page (1700 × 2200 pixels, 12-point type). */
+export async function renderScanPng(lines: string[]): Promise<{ png: Uint8Array; width: number; height: number }> {
+  registerFont();
+  const [width, height] = [1700, 2200];
+  const canvas = createCanvas(width, height);
+  const context = canvas.getContext("2d");
+  context.fillStyle = "#ffffff";
+  context.fillRect(0, 0, width, height);
+  context.fillStyle = "#111111";
+  context.font = `34px ${FONT_FAMILY}`; // 12 pt at 200 dpi is 33 px
+  lines.forEach((line, index) => context.fillText(line, 150, 220 + index * 62));
+  return { png: new Uint8Array(await canvas.encode("png")), width, height };
+}
+
 /** A Word file with one paragraph per entry, made by the `docx` package. */
 export async function makeDocx(paragraphs: string[]): Promise<Uint8Array> {
   const doc = new Document({

@@ -27,6 +27,8 @@ describe("readDocument", () => {
   it("ships limits sized for office paper", () => {
     expect(DEFAULT_READ_OPTIONS).toEqual({
       timeLimitMs: 120_000,
+      pageTimeLimitMs: 60_000,
+      maxOcrPixels: 16_000_000,
       maxPages: 500,
       minLettersPerPage: 20,
       ocrScale: 2,
