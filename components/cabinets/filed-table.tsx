@@ -2,10 +2,12 @@ import Link from "next/link";
 import type { DocumentSummary } from "@/lib/data/documents";
 import { DisposedBadge, HoldBadge } from "@/components/records/hold-badge";
 import { RetentionWords } from "@/components/records/retention-words";
+import { MoveButton } from "@/components/filing/move-dialog";
 
 const HOW: Record<string, string> = { accepted: "Accepted", refiled: "Refiled", by_hand: "Filed by hand", auto: "Auto-filed", imported: "Imported" };
 
-export function FiledTable({ items }: { items: DocumentSummary[] }) {
+/** `movable`: the viewer may move documents (a Move… control per row, inside a MoveProvider). */
+export function FiledTable({ items, movable = false }: { items: DocumentSummary[]; movable?: boolean }) {
   return (
     <table className="w-full border-collapse text-sm">
       <thead className="sticky top-0 bg-paper text-left text-xs text-ink-soft">
@@ -16,6 +18,7 @@ export function FiledTable({ items }: { items: DocumentSummary[] }) {
           <th className="py-1 pr-2 font-medium">Filed (UTC)</th>
           <th className="py-1 pr-2 font-medium">How, by whom</th>
           <th className="py-1 pr-2 font-medium">Retention date</th>
+          {movable && <th className="py-1 pr-2 font-medium"><span className="sr-only">Move</span></th>}
         </tr>
       </thead>
       <tbody>
@@ -41,6 +44,11 @@ export function FiledTable({ items }: { items: DocumentSummary[] }) {
             <td className="py-1 pr-2" data-testid="retention-cell">
               <RetentionWords retention={d.retention} held={d.legalHold} disposedAt={d.disposedAt} />
             </td>
+            {movable && (
+              <td className="py-1 pr-2">
+                {!d.disposedAt && <MoveButton doc={{ id: d.id, name: d.name, cabinetTypeId: d.cabinetTypeId, matterId: d.matterId }} />}
+              </td>
+            )}
           </tr>
         ))}
       </tbody>

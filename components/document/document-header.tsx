@@ -10,6 +10,8 @@ interface DocumentHeaderProps {
   document: DocumentDetail;
   state: DocumentState;
   placement: FilingEvent | null;
+  /** The Move control, when this person may move this document. */
+  move?: React.ReactNode;
 }
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
@@ -22,7 +24,7 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 }
 
 /** Name, state and the facts of the upload; where the document is filed; the original. */
-export function DocumentHeader({ document: d, state, placement }: DocumentHeaderProps) {
+export function DocumentHeader({ document: d, state, placement, move }: DocumentHeaderProps) {
   const sensitive = d.sensitive.ssn + d.sensitive.routing + d.sensitive.card;
   return (
     <header className="space-y-3">
@@ -75,6 +77,7 @@ export function DocumentHeader({ document: d, state, placement }: DocumentHeader
                 {" "}· {actionWords(placement.action)} by {placement.user ?? "Foldwright"} on <span className="font-mono text-xs">{formatUtc(placement.at)}</span> UTC
               </span>
             )}
+            {move}
           </p>
         ) : (
           <p className="text-ink-soft">Not filed yet.{state === "to_review" ? " It waits in To review for a person to accept or refile the suggestion." : ""}</p>

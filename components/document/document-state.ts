@@ -18,10 +18,22 @@ export function lastPlacement(timeline: FilingEvent[]): FilingEvent | null {
   return null;
 }
 
+/** The decision in force: the latest placement that no later "undone" event took back. */
+export function placementInForce(timeline: FilingEvent[]): FilingEvent | null {
+  const reversed = new Set<number>();
+  for (let i = timeline.length - 1; i >= 0; i--) {
+    const e = timeline[i];
+    if (e.action === "undone") {
+      if (e.reversesEventId !== null) reversed.add(e.reversesEventId);
+    } else if (e.action !== "suggested" && !reversed.has(e.id)) return e;
+  }
+  return null;
+}
+
 /** Where the document stands, in Foldwright's words, from its row, suggestion and record. */
 export function documentState(doc: DocumentDetail, suggestion: SuggestionDetail | null, timeline: FilingEvent[]): DocumentState {
-  const placed = lastPlacement(timeline);
-  if (doc.cabinetType || doc.matter || placed) return placed?.action === "auto_filed" ? "auto_filed" : "filed";
+  // An undo can put a document back in To review, so its row (not the record's last line) says whether it is filed.
+  if (doc.cabinetType || doc.matter || doc.filedAt) return placementInForce(timeline)?.action === "auto_filed" ? "auto_filed" : "filed";
   if (doc.status === "reading") return "reading";
   if (doc.status === "unreadable") return "unreadable";
   return suggestion ? "to_review" : "waiting";

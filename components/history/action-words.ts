@@ -1,5 +1,5 @@
 // Filing actions in Foldwright's words (DESIGN §3), for the record on every screen.
-export const ACTIONS = ["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved", "imported"] as const;
+export const ACTIONS = ["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved", "imported", "undone"] as const;
 export type FilingAction = (typeof ACTIONS)[number];
 
 export const ACTION_WORDS: Record<FilingAction, string> = {
@@ -11,6 +11,7 @@ export const ACTION_WORDS: Record<FilingAction, string> = {
   confirmed: "Confirmed",
   moved: "Moved",
   imported: "Imported",
+  undone: "Undone",
 };
 
 /** Records actions (issue 11), not offered as History filters. */

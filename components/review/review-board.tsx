@@ -3,6 +3,8 @@ import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { DecisionNotice, type Decision } from "@/components/filing/decision-notice";
+import { decisionOf, manyAcceptedDecision, type FilingAnswer } from "@/components/filing/decision-words";
 import { ApiError, getJson, postJson, type FilingPayload } from "./api";
 import { DecisionPanel } from "./decision-panel";
 import { QueueTable } from "./queue-table";
@@ -32,6 +34,7 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
   const [checked, setChecked] = useState<Set<number>>(new Set());
   const [bar, setBar] = useState(0.9);
   const [message, setMessage] = useState<{ tone: "info" | "error"; text: string } | null>(null);
+  const [decision, setDecision] = useState<Decision | null>(null);
   const pickerRef = useRef<HTMLInputElement>(null);
 
   const key = `/api/review?list=${list}&sort=${sort}&dir=${dir}&pageSize=200${cabinetType ? `&cabinetType=${cabinetType}` : ""}${matter ? `&matter=${matter}` : ""}${confidence ? `&${confidence.startsWith("below") ? "maxConfidence" : "minConfidence"}=${confidence.split(":")[1]}` : ""}`;
@@ -55,9 +58,10 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
       const next = items[at + 1] ?? items[at - 1] ?? null;
       setSelectedId(next?.id ?? null);
       try {
+        const box: { answer?: FilingAnswer } = {};
         await mutate(
           async (current) => {
-            await postJson(`/api/documents/${item.id}/filing`, payload);
+            box.answer = await postJson<FilingAnswer>(`/api/documents/${item.id}/filing`, payload);
             return current;
           },
           {
@@ -67,23 +71,24 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
             revalidate: true,
           },
         );
-        const verb = payload.action === "accept" ? "Accepted" : payload.action === "confirm" ? "Confirmed" : "Filed";
-        setMessage({ tone: "info", text: `${verb}: ${item.name}.` });
+        setMessage(null);
+        if (box.answer) setDecision(decisionOf(item.name, item.id, box.answer, { types, matters, list }));
       } catch (e) {
         setSelectedId(item.id);
         setMessage({ tone: "error", text: `${item.name} was not filed: ${e instanceof ApiError ? e.message : "the server could not be reached. Try again."}` });
       }
     },
-    [items, mutate],
+    [items, mutate, types, matters, list],
   );
 
   const acceptChecked = async () => {
     const ids = [...checked];
     if (!ids.length) return;
     try {
-      const r = await postJson<{ accepted: number; results: { ok: boolean; documentId: number; error?: { message: string } }[] }>("/api/review/accept", { documentIds: ids });
+      const r = await postJson<{ accepted: number; results: { ok: boolean; documentId: number; filing?: { eventId: number }; error?: { message: string } }[] }>("/api/review/accept", { documentIds: ids });
       const failed = r.results.filter((x) => !x.ok);
-      setMessage({ tone: failed.length ? "error" : "info", text: `Accepted ${r.accepted} of ${ids.length}.${failed.length ? ` Not filed: ${failed.map((f) => `#${f.documentId} (${f.error?.message})`).join("; ")}` : ""}` });
+      setDecision(manyAcceptedDecision(r.results, ids.length));
+      setMessage(failed.length ? { tone: "error", text: `Not filed: ${failed.map((f) => `#${f.documentId} (${f.error?.message})`).join("; ")}` } : null);
       setChecked(new Set());
     } catch (e) {
       setMessage({ tone: "error", text: e instanceof ApiError ? e.message : "The server could not be reached; nothing was accepted." });
@@ -167,6 +172,7 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
           </div>
         )}
 
+        <DecisionNotice decision={decision} onUndone={(ids) => { void mutate(); setSelectedId(ids[0] ?? null); }} />
         {message && <Notice tone={message.tone}>{message.text}</Notice>}
         {error && <Notice tone="error">{error.message}</Notice>}
         {isLoading && <p className="text-sm text-ink-soft">Loading the queue…</p>}

@@ -21,6 +21,9 @@ export interface DocumentSummary {
   uploadedBy: string;
   matter: string | null;
   cabinetType: string | null;
+  /** Where it is filed, as ids (for links back to its cabinet and for Move). */
+  matterId: number | null;
+  cabinetTypeId: number | null;
   ocrUsed: boolean;
   pageCount: number | null;
   filedAt: string | null;
@@ -71,6 +74,8 @@ const SUMMARY_COLUMNS = [
   "u.name as uploader",
   "m.number as matter",
   "c.name as cabinet",
+  "d.matter_id",
+  "d.cabinet_type_id",
   "d.filed_at",
   "d.filed_how",
   "fu.name as filer",
@@ -108,6 +113,8 @@ function toSummary(r: Row): DocumentSummary {
     uploadedBy: String(r.uploader),
     matter: (r.matter as string | null) ?? null,
     cabinetType: (r.cabinet as string | null) ?? null,
+    matterId: r.matter_id === null || r.matter_id === undefined ? null : Number(r.matter_id),
+    cabinetTypeId: r.cabinet_type_id === null || r.cabinet_type_id === undefined ? null : Number(r.cabinet_type_id),
     ocrUsed: Boolean(r.ocr_used),
     pageCount: r.page_count === null ? null : Number(r.page_count),
     filedAt: r.filed_at ? new Date(r.filed_at as string).toISOString() : null,
@@ -140,7 +147,7 @@ const missing = () => notFound("That document");
 function toRestrictedStub(r: Row): DocumentSummary {
   return {
     id: Number(r.id), name: String(r.original_name), mediaType: "", sizeBytes: 0, status: "ready", reason: RESTRICTED_NOTE,
-    uploadedAt: new Date(r.uploaded_at as string).toISOString(), uploadedBy: "", matter: null, cabinetType: null, ocrUsed: false,
+    uploadedAt: new Date(r.uploaded_at as string).toISOString(), uploadedBy: "", matter: null, cabinetType: null, matterId: null, cabinetTypeId: null, ocrUsed: false,
     pageCount: null, filedAt: null, filedHow: null, filedBy: null, legalHold: false, restricted: true,
     retention: { dueOn: null, basis: "not_filed", rule: null }, disposedAt: null,
   };

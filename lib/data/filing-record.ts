@@ -22,6 +22,8 @@ export interface FilingEvent {
   modelVersionId: number | null;
   confidence: number | null;
   reason: string | null;
+  /** For an "undone" event: the event it reversed. */
+  reversesEventId: number | null;
 }
 
 function events(db: Knex) {
@@ -36,7 +38,7 @@ function events(db: Knex) {
     .select(
       "e.id", "e.document_id", "d.original_name", "e.created_at", "e.action", "u.name as user_name",
       "fc.name as from_type", "tc.name as to_type", "fm.number as from_matter", "tm.number as to_matter",
-      "e.model_version_id", "e.confidence", "e.reason",
+      "e.model_version_id", "e.confidence", "e.reason", "e.reverses_event_id",
       "e.from_cabinet_type_id", "e.to_cabinet_type_id", "e.from_matter_id", "e.to_matter_id",
     );
 }
@@ -55,6 +57,7 @@ const toEvent = (r: Record<string, unknown>): FilingEvent => ({
   modelVersionId: (r.model_version_id as number | null) ?? null,
   confidence: r.confidence === null ? null : Number(r.confidence),
   reason: (r.reason as string | null) ?? null,
+  reversesEventId: r.reverses_event_id === null || r.reverses_event_id === undefined ? null : Number(r.reverses_event_id),
 });
 
 /** Events with the cabinet type names and matter numbers they had when they happened (a rename later changes nothing). */
@@ -157,7 +160,7 @@ export async function getLatestSuggestion(user: CurrentUser, documentId: number)
  * that starts like a formula (=, +, -, @) gets a leading apostrophe so a spreadsheet shows it
  * as text (common practice against CSV injection).
  */
-const CSV_HEAD = ["id", "at", "document_id", "document", "action", "user", "from_cabinet_type", "to_cabinet_type", "from_matter", "to_matter", "model_version", "confidence", "reason"];
+const CSV_HEAD = ["id", "at", "document_id", "document", "action", "user", "from_cabinet_type", "to_cabinet_type", "from_matter", "to_matter", "model_version", "confidence", "reason", "reverses_event"];
 
 function csvCell(v: unknown): string {
   let s = v === null || v === undefined ? "" : String(v);
@@ -167,7 +170,7 @@ function csvCell(v: unknown): string {
 
 function csvLines(items: FilingEvent[]): string {
   return items
-    .map((e) => [e.id, e.at, e.documentId, e.documentName, e.action, e.user ?? "Foldwright", e.fromCabinetType, e.toCabinetType, e.fromMatter, e.toMatter, e.modelVersionId, e.confidence, e.reason].map(csvCell).join(",") + "\r\n")
+    .map((e) => [e.id, e.at, e.documentId, e.documentName, e.action, e.user ?? "Foldwright", e.fromCabinetType, e.toCabinetType, e.fromMatter, e.toMatter, e.modelVersionId, e.confidence, e.reason, e.reversesEventId].map(csvCell).join(",") + "\r\n")
     .join("");
 }
 

@@ -9,7 +9,7 @@ import { getDb } from "@/db";
 import { AppError, badInput, notFound } from "@/lib/errors";
 import { canSeeMatter } from "@/lib/data/catalog";
 import { canSeeDocument } from "@/lib/data/document-access";
-import { appendFilingEvent, type FilingEventAction } from "@/lib/data/record";
+import { appendFilingEvent, priorFilingOf, type FilingEventAction } from "@/lib/data/record";
 import type { CurrentUser } from "@/lib/data/users";
 
 export type FilingAction = "accept" | "refile" | "file" | "confirm" | "move";
@@ -33,14 +33,17 @@ export interface FilingResult {
   action: string;
 }
 
-interface DocumentRow {
+export interface DocumentRow {
   id: number;
   status: string;
+  filed_by: number | null;
   filed_at: Date | null;
   filed_how: string | null;
+  confirmed_by: number | null;
   confirmed_at: Date | null;
   cabinet_type_id: number | null;
   matter_id: number | null;
+  disposed_at: Date | null;
 }
 
 interface SuggestionRow {
@@ -52,11 +55,11 @@ interface SuggestionRow {
 
 const parse = <T>(v: unknown): T => (typeof v === "string" ? JSON.parse(v) : v) as T;
 
-async function lockDocument(trx: Knex.Transaction, id: number): Promise<DocumentRow> {
+export async function lockDocument(trx: Knex.Transaction, id: number): Promise<DocumentRow> {
   const doc = await trx("documents")
     .where({ id })
     .forUpdate()
-    .first("id", "status", "filed_at", "filed_how", "confirmed_at", "cabinet_type_id", "matter_id");
+    .first("id", "status", "filed_by", "filed_at", "filed_how", "confirmed_by", "confirmed_at", "cabinet_type_id", "matter_id", "disposed_at");
   if (!doc) throw notFound("That document");
   return doc;
 }
@@ -68,7 +71,7 @@ async function requireCabinetType(trx: Knex.Transaction, id: number | null | und
   return id;
 }
 
-async function requireMatter(user: CurrentUser, id: number | null | undefined): Promise<number> {
+export async function requireMatter(user: CurrentUser, id: number | null | undefined): Promise<number> {
   if (!id) throw badInput("Choose the matter: Foldwright could not tell it from the document.");
   // A matter behind a wall the user is outside of is answered like one that does not exist.
   if (!(await canSeeMatter(user, id))) throw badInput("That matter does not exist or is not open to you. Pick another.");
@@ -80,6 +83,8 @@ export async function fileDocument(user: CurrentUser, documentId: number, input:
   if (!(await canSeeDocument(user, documentId))) throw notFound("That document");
   return getDb().transaction(async (trx) => {
     const doc = await lockDocument(trx, documentId);
+    if (doc.disposed_at) throw new AppError(409, "disposed", "This document was destroyed under an approved disposal; only its tombstone is left.");
+    const priorFiling = priorFilingOf(doc);
     const suggestion: SuggestionRow | undefined = await trx("suggestions").where({ document_id: documentId }).orderBy("id", "desc").first();
     const ranked = suggestion ? parse<{ cabinetTypeId: number; confidence: number }[]>(suggestion.ranked) : [];
     const confidenceOf = (typeId: number | null) => ranked.find((r) => r.cabinetTypeId === typeId)?.confidence ?? null;
@@ -94,6 +99,7 @@ export async function fileDocument(user: CurrentUser, documentId: number, input:
         fromMatterId: doc.matter_id, toMatterId: doc.matter_id,
         modelVersionId: suggestion?.model_version_id ?? null, confidence: confidenceOf(doc.cabinet_type_id),
         reason: input.reason ?? "Spot-check: the auto-filing is right.",
+        priorFiling,
       });
       return { documentId, cabinetTypeId: doc.cabinet_type_id!, matterId: doc.matter_id!, filedHow: "auto", eventId, action: "confirmed" };
     }
@@ -114,6 +120,9 @@ export async function fileDocument(user: CurrentUser, documentId: number, input:
       if (typeId === doc.cabinet_type_id && matterId === doc.matter_id && doc.filed_how !== "auto") {
         throw badInput("The document is already in that cabinet. Choose another cabinet type or matter.");
       }
+      // A spot-check correction is a refile (its reason optional); moving what a person filed says why.
+      const spotCheck = doc.filed_how === "auto" && !doc.confirmed_at;
+      if (!spotCheck && !input.reason?.trim()) throw badInput("Say in a few words why the document moves (for example: wrong matter).");
       action = "moved";
       filedHow = doc.filed_how === "auto" ? "refiled" : doc.filed_how!; // a person decided: it becomes a training label
     } else {
@@ -153,7 +162,8 @@ export async function fileDocument(user: CurrentUser, documentId: number, input:
       toMatterId: matterId,
       modelVersionId: suggestion?.model_version_id ?? null,
       confidence: confidenceOf(typeId),
-      reason: input.reason ?? null,
+      reason: input.reason?.trim() || null,
+      priorFiling,
     });
     return { documentId, cabinetTypeId: typeId, matterId, filedHow, eventId, action };
   });

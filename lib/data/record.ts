@@ -36,8 +36,62 @@ export interface NewFilingEvent {
   modelVersionId?: number | null;
   confidence?: number | null;
   reason?: string | null;
+  /** For an "undone" event: the event it reverses (each event can be reversed once). */
+  reversesEventId?: number | null;
+  /** Where the document stood before this decision, so an undo can put exactly that back. */
+  priorFiling?: PriorFiling | null;
   /** Only for history written after the fact (the demo seed); otherwise the database clock. */
   createdAt?: Date;
+}
+
+/** A document's filing as it stood before a decision (all null while it waits in To review). */
+export interface PriorFiling {
+  cabinetTypeId: number | null;
+  matterId: number | null;
+  filedBy: number | null;
+  filedAt: string | null; // ISO 8601
+  filedHow: string | null;
+  confirmedBy: number | null;
+  confirmedAt: string | null;
+}
+
+interface FilingColumns {
+  cabinet_type_id: number | null;
+  matter_id: number | null;
+  filed_by?: number | null;
+  filed_at: Date | string | null;
+  filed_how: string | null;
+  confirmed_by?: number | null;
+  confirmed_at: Date | string | null;
+}
+
+const iso = (v: Date | string | null | undefined) => (v === null || v === undefined ? null : new Date(v).toISOString());
+
+/** The snapshot of a locked document row's filing columns, for `priorFiling`. */
+export function priorFilingOf(doc: FilingColumns): PriorFiling {
+  return {
+    cabinetTypeId: doc.cabinet_type_id ?? null,
+    matterId: doc.matter_id ?? null,
+    filedBy: doc.filed_by ?? null,
+    filedAt: iso(doc.filed_at),
+    filedHow: doc.filed_how ?? null,
+    confirmedBy: doc.confirmed_by ?? null,
+    confirmedAt: iso(doc.confirmed_at),
+  };
+}
+
+/** The document columns that put a snapshot back (what an undo writes). */
+export function filingColumnsOf(p: PriorFiling): Record<string, unknown> {
+  const date = (v: string | null) => (v ? new Date(v) : null);
+  return {
+    cabinet_type_id: p.cabinetTypeId,
+    matter_id: p.matterId,
+    filed_by: p.filedBy,
+    filed_at: date(p.filedAt),
+    filed_how: p.filedHow,
+    confirmed_by: p.confirmedBy,
+    confirmed_at: date(p.confirmedAt),
+  };
 }
 
 const REASON_MAX = 600;
@@ -67,6 +121,8 @@ export async function appendFilingEvent(db: Knex | Knex.Transaction, e: NewFilin
     model_version_id: e.modelVersionId ?? null,
     confidence: e.confidence ?? null,
     reason: e.reason ? e.reason.slice(0, REASON_MAX) : null,
+    reverses_event_id: e.reversesEventId ?? null,
+    prior_filing: e.priorFiling ? JSON.stringify(e.priorFiling) : null,
     ...(e.createdAt ? { created_at: e.createdAt } : {}),
   });
   return Number(id);

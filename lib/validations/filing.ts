@@ -1,7 +1,9 @@
 import { z } from "zod";
 
 export const filingSchema = z.object({
-  action: z.enum(["accept", "refile", "file", "confirm", "move"], { message: "action must be accept, refile, file, confirm or move." }),
+  action: z.enum(["accept", "refile", "file", "confirm", "move", "undo"], { message: "action must be accept, refile, file, confirm, move or undo." }),
+  /** For undo: the decision (filing event) to take back. */
+  eventId: z.number().int().positive().optional(),
   cabinetTypeId: z.number().int().positive().optional(),
   matterId: z.number().int().positive().optional(),
   reason: z.string().trim().max(600).optional(),
@@ -11,6 +13,10 @@ export const filingSchema = z.object({
 
 export const acceptManySchema = z.object({
   documentIds: z.array(z.number().int().positive()).min(1, "Pick at least one document.").max(200, "Accept at most 200 documents at once."),
+});
+
+export const undoManySchema = z.object({
+  eventIds: z.array(z.number().int().positive()).min(1, "Name at least one decision to undo.").max(200, "Undo at most 200 decisions at once."),
 });
 
 export const queueSchema = z.object({
@@ -26,7 +32,7 @@ export const queueSchema = z.object({
 });
 
 export const eventsSchema = z.object({
-  action: z.enum(["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved", "imported"]).optional(),
+  action: z.enum(["suggested", "accepted", "refiled", "filed_by_hand", "auto_filed", "confirmed", "moved", "imported", "undone"]).optional(),
   document: z.coerce.number().int().positive().optional(),
   from: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "from must be a date like 2026-12-01.").optional(),
   to: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "to must be a date like 2026-12-01.").optional(),

@@ -77,7 +77,7 @@ describe("the filing loop in a browser", () => {
     await expect.poll(() => panel.getByTestId("accept-button").isEnabled()).toBe(true);
     await page.keyboard.press("a");
     await rowA.waitFor({ state: "detached", timeout: 15_000 }); // at once (optimistic) …
-    await page.getByText(`Accepted: ${files[0].name}.`).waitFor({ timeout: 15_000 }); // … and confirmed
+    await page.getByText(`Accepted: ${files[0].name} → Invoices & receipts`).waitFor({ timeout: 15_000 }); // … and confirmed
 
     const rowB = page.locator(`[data-testid="queue-row"][data-id="${ids[1]}"]`);
     await rowB.click();
@@ -86,7 +86,7 @@ describe("the filing loop in a browser", () => {
     await expect.poll(() => panel.getByTestId("accept-button").isEnabled()).toBe(true);
     await page.keyboard.press("2");
     await rowB.waitFor({ state: "detached", timeout: 15_000 });
-    await page.getByText(`Filed: ${files[1].name}.`).waitFor({ timeout: 15_000 });
+    await page.getByText(`Refiled: ${files[1].name} → ${runnerUp}`).waitFor({ timeout: 15_000 });
     await context.close();
 
     const types = new Map((await owner("cabinet_types").select("id", "name")).map((t) => [t.id, t.name]));

@@ -44,6 +44,9 @@ const MATRIX: Row[] = [
   { method: "POST", path: () => `/api/documents/${fixtures.open}/filing`, file: "api/documents/[id]/filing/route.ts", body: {}, expect: { signedOut: 401, clerk: 422, partner: 422, admin: 422, auditor: 403 } },
   { method: "GET", path: "/api/review", file: "api/review/route.ts", expect: { signedOut: 401, clerk: 200, partner: 200, admin: 200, auditor: 403 } },
   { method: "POST", path: "/api/review/accept", file: "api/review/accept/route.ts", body: { documentIds: [] }, expect: { signedOut: 401, clerk: 422, partner: 422, admin: 422, auditor: 403 } },
+  // Undo: an empty list is a 422 for the roles that may file; what an undo does is in tests/integration/undo-move.test.ts.
+  { method: "POST", path: "/api/review/undo", file: "api/review/undo/route.ts", body: { eventIds: [] }, expect: { signedOut: 401, clerk: 422, partner: 422, admin: 422, auditor: 403 } },
+  { method: "POST", path: () => `/api/documents/${fixtures.open}/filing`, file: "api/documents/[id]/filing/route.ts", note: "undo without an event", body: { action: "undo" }, expect: { signedOut: 401, clerk: 422, partner: 422, admin: 422, auditor: 403 } },
   { method: "GET", path: "/api/filing-events", file: "api/filing-events/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
   { method: "GET", path: "/api/filing-events?format=csv", file: "api/filing-events/route.ts", note: "CSV", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },
   { method: "GET", path: "/api/models", file: "api/models/route.ts", expect: { signedOut: 401, clerk: 403, partner: 403, admin: 200, auditor: 200 } },

@@ -80,8 +80,8 @@ describe("moving a filed document", () => {
 
     // Without a stale-screen guard both go through, in turn: the second starts where the first ended.
     await Promise.all([
-      fileDocument(admin, doc, { action: "move", matterId: matters[0] }),
-      fileDocument(admin, doc, { action: "move", cabinetTypeId: types.get("Correspondence") }),
+      fileDocument(admin, doc, { action: "move", matterId: matters[0], reason: "wrong matter" }),
+      fileDocument(admin, doc, { action: "move", cabinetTypeId: types.get("Correspondence"), reason: "wrong type" }),
     ]);
     const moves = await owner("filing_events").where({ document_id: doc, action: "moved" }).orderBy("id");
     expect(moves).toHaveLength(3);

@@ -8,6 +8,9 @@ import { FiledTable } from "@/components/cabinets/filed-table";
 import { Notice } from "@/components/ui/notice";
 import { requirePageUser } from "@/lib/data/current-user";
 import { listCabinets, listDocuments } from "@/lib/data/documents";
+import { listCabinetTypes, listVisibleMatters } from "@/lib/data/catalog";
+import { MoveProvider } from "@/components/filing/move-dialog";
+import { can } from "@/lib/auth/permissions";
 import { RETENTION_CAUTION } from "@/lib/retention";
 
 export const metadata: Metadata = { title: "Cabinets" };
@@ -34,6 +37,8 @@ export default async function CabinetsPage({ searchParams }: { searchParams: Pro
     listCabinets(user),
     listDocuments(user, { filed: true, matterId: p.matter, cabinetTypeId: p.cabinetType, q: p.q || undefined, retention: p.retention, page: p.page, pageSize: PAGE_SIZE }),
   ]);
+  const movable = can(user.role, "filing.decide");
+  const [types, matters] = movable ? await Promise.all([listCabinetTypes(user, true), listVisibleMatters(user)]) : [[], []];
   const chosen = cabinets.find((c) => c.matterId === p.matter && (!p.cabinetType || c.cabinetTypeId === p.cabinetType));
   const heading = chosen ? `${chosen.matter} · ${p.cabinetType ? chosen.cabinetType : "all cabinets"}` : "All filed documents";
   const href = (over: { page?: number; retention?: string | null }) => {
@@ -44,7 +49,7 @@ export default async function CabinetsPage({ searchParams }: { searchParams: Pro
   const link = (page: number) => href({ page });
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
 
-  return (
+  const body = (
     <section>
       <h1 className="font-serif text-2xl">Cabinets</h1>
       <p className="mb-4 mt-1 text-sm text-ink-soft">Filed documents by matter and cabinet type. Restricted matters appear only to their team and admins.</p>
@@ -97,7 +102,7 @@ export default async function CabinetsPage({ searchParams }: { searchParams: Pro
                     : "This cabinet is empty."}
             </p>
           ) : (
-            <FiledTable items={items} />
+            <FiledTable items={items} movable={movable} />
           )}
           {pages > 1 && (
             <nav aria-label="Pages" className="flex gap-3 text-xs">
@@ -113,4 +118,6 @@ export default async function CabinetsPage({ searchParams }: { searchParams: Pro
       </div>
     </section>
   );
+  // The provider holds the Move dialog and its confirmation with Undo above the page.
+  return movable ? <MoveProvider types={types.map((t) => ({ id: t.id, name: t.name }))} matters={matters}>{body}</MoveProvider> : body;
 }

@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { forbidden, notFound } from "next/navigation";
+import { DocumentBreadcrumb } from "@/components/document/document-breadcrumb";
 import { DocumentHeader } from "@/components/document/document-header";
+import { MoveButton, MoveProvider } from "@/components/filing/move-dialog";
+import { listCabinetTypes, listVisibleMatters } from "@/lib/data/catalog";
 import { documentState, lastPlacement } from "@/components/document/document-state";
 import { SuggestionPanel } from "@/components/document/suggestion-panel";
 import { TextPanel } from "@/components/document/text-panel";
@@ -16,10 +18,17 @@ import { DocumentRecords } from "@/components/records/document-records";
 import { AppError } from "@/lib/errors";
 import { documentIdSchema } from "@/lib/validations/documents";
 
-export const metadata: Metadata = { title: "Document" };
-
 interface DocumentPageProps {
   params: Promise<{ id: string }>;
+}
+
+/** Titled by the file name (behind the same wall check as the page: a walled one is "Not found"). */
+export async function generateMetadata({ params }: DocumentPageProps): Promise<Metadata> {
+  const { user, allowed } = await requirePageUser("documents.read");
+  const id = documentIdSchema.safeParse((await params).id);
+  if (!allowed || !id.success) return { title: "Document" };
+  const name = await getDocument(user, id.data).then((d) => d.name, () => null);
+  return { title: name ?? "Not found" };
 }
 
 /** The document behind the ethical wall check: a missing one is a 404, a walled one a 403. */
@@ -46,19 +55,18 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
     document.disposedAt ? findDisposalOf(id.data) : null,
   ]);
   const state = documentState(document, suggestion, timeline);
+  const movable = can(user.role, "filing.decide") && Boolean(document.filedAt) && !document.disposedAt;
+  const [types, matters] = movable ? await Promise.all([listCabinetTypes(user, true), listVisibleMatters(user)]) : [[], []];
 
-  return (
+  const page = (
     <article className="space-y-6">
-      <nav aria-label="Breadcrumb" className="text-xs text-ink-soft">
-        {can(user.role, "history.read") ? (
-          <Link href={`/history?document=${document.id}`} className="text-verdigris hover:underline">
-            This document in History
-          </Link>
-        ) : (
-          <span>Document #{document.id}</span>
-        )}
-      </nav>
-      <DocumentHeader document={document} state={state} placement={lastPlacement(timeline)} />
+      <DocumentBreadcrumb document={document} historyLink={can(user.role, "history.read")} />
+      <DocumentHeader
+        document={document}
+        state={state}
+        placement={lastPlacement(timeline)}
+        move={movable ? <MoveButton doc={{ id: document.id, name: document.name, cabinetTypeId: document.cabinetTypeId, matterId: document.matterId }} className="ml-2 rounded border border-paper-edge bg-white/70 px-2 py-0.5 text-xs font-medium text-verdigris hover:bg-paper-deep" /> : null}
+      />
       <DocumentRecords document={document} holds={holds} canPlaceHold={can(user.role, "holds.place")} disposal={disposal} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-6">
@@ -72,4 +80,5 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
       </div>
     </article>
   );
+  return movable ? <MoveProvider types={types.map((t) => ({ id: t.id, name: t.name }))} matters={matters}>{page}</MoveProvider> : page;
 }
