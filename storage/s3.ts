@@ -6,6 +6,7 @@ import {
   GetObjectCommand,
   HeadBucketCommand,
   HeadObjectCommand,
+  ListObjectsV2Command,
   PutObjectCommand,
   S3Client,
 } from "@aws-sdk/client-s3";
@@ -98,6 +99,22 @@ export async function getObjectStream(key: string, bucket = env.s3.bucket): Prom
 export async function getObjectBytes(key: string, bucket = env.s3.bucket): Promise<Buffer> {
   const out = await getS3().send(new GetObjectCommand({ Bucket: bucket, Key: key }));
   return Buffer.from(await out.Body!.transformToByteArray());
+}
+
+/** Deletes every object whose key starts with `prefix` (one by one: s3rver has no batch delete). */
+export async function deleteObjectsUnder(prefix: string, bucket = env.s3.bucket): Promise<number> {
+  let deleted = 0;
+  let token: string | undefined;
+  do {
+    const page = await getS3().send(new ListObjectsV2Command({ Bucket: bucket, Prefix: prefix, ContinuationToken: token }));
+    for (const o of page.Contents ?? []) {
+      if (!o.Key) continue;
+      await deleteObject(o.Key, bucket);
+      deleted++;
+    }
+    token = page.IsTruncated ? page.NextContinuationToken : undefined;
+  } while (token);
+  return deleted;
 }
 
 export async function deleteObject(key: string, bucket = env.s3.bucket): Promise<void> {

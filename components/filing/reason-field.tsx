@@ -39,7 +39,7 @@ export function ReasonField({ id, value, onChange, required, label }: ReasonFiel
         id={id}
         value={value}
         maxLength={REASON_MAX}
-        required={required}
+        aria-required={required}
         onChange={(e) => onChange(e.target.value)}
         placeholder="or say it in a few words"
         className="w-full rounded border border-paper-edge bg-white px-2 py-1 text-sm text-ink"

@@ -16,6 +16,7 @@ import type { CurrentUser } from "@/lib/data/users";
 import { AppError, notAllowed } from "@/lib/errors";
 import { utcDay } from "@/lib/records/retention-date";
 import { deleteObject } from "@/storage/s3";
+import { deletePreviews } from "@/lib/data/preview";
 
 export interface ApprovalResult {
   batch: BatchDetail;
@@ -109,6 +110,7 @@ async function removeOriginals(batchId: number): Promise<number> {
   for (const r of rows) {
     try {
       await deleteObject(r.storage_key); // S3 answers success for a key already gone, so a retry is safe
+      await deletePreviews(r.document_id); // the page images go with the original
       await db("disposal_batch_items").where({ batch_id: batchId, document_id: r.document_id }).update({ object_deleted_at: db.raw("CURRENT_TIMESTAMP(3)") });
     } catch (e) {
       console.error(`disposal batch ${batchId}: the original of document ${r.document_id} could not be deleted yet`, e);

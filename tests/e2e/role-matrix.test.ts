@@ -39,6 +39,8 @@ const MATRIX: Row[] = [
   { method: "GET", path: () => `/api/documents/${fixtures.open}/original`, file: "api/documents/[id]/original/route.ts", expect: all(200, 401) },
   // The restricted demo matter's team is the partner (and admins see everything).
   { method: "GET", path: () => `/api/documents/${fixtures.walled}`, file: "api/documents/[id]/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 404, partner: 200, admin: 200, auditor: 404 } },
+  { method: "GET", path: () => `/api/documents/${fixtures.open}/preview?page=1`, file: "api/documents/[id]/preview/route.ts", expect: all(200, 401) },
+  { method: "GET", path: () => `/api/documents/${fixtures.walled}/preview?page=1`, file: "api/documents/[id]/preview/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 404, partner: 200, admin: 200, auditor: 404 } },
   { method: "GET", path: () => `/api/documents/${fixtures.walled}/original`, file: "api/documents/[id]/original/route.ts", note: "restricted matter", expect: { signedOut: 401, clerk: 404, partner: 200, admin: 200, auditor: 404 } },
   // Filing: a body that names no action is a 422 for the roles that may file.
   { method: "POST", path: () => `/api/documents/${fixtures.open}/filing`, file: "api/documents/[id]/filing/route.ts", body: {}, expect: { signedOut: 401, clerk: 422, partner: 422, admin: 422, auditor: 403 } },

@@ -63,6 +63,7 @@ const SURFACES: Surface[] = [
   { name: "list by ids", file: "api/documents/route.ts", path: (d) => `/api/documents?ids=${d.id}&status=ready`, roles: ALL_READERS, shows: KINDS, carries: listCarries },
   { name: "document", file: "api/documents/[id]/route.ts", path: (d) => `/api/documents/${d.id}`, roles: ALL_READERS, shows: KINDS, own: true },
   { name: "original", file: "api/documents/[id]/original/route.ts", path: (d) => `/api/documents/${d.id}/original`, roles: ALL_READERS, shows: KINDS, own: true },
+  { name: "page preview", file: "api/documents/[id]/preview/route.ts", path: (d) => `/api/documents/${d.id}/preview?page=1`, roles: ALL_READERS, shows: KINDS, own: true },
   { name: "document page", file: "(app)/documents/[id]/page.tsx", path: (d) => `/documents/${d.id}`, roles: ALL_READERS, shows: KINDS, own: true },
   { name: "To review queue", file: "api/review/route.ts", path: () => "/api/review?list=review&pageSize=200", roles: DECIDERS, shows: ["suggested", "candidate"], carries: listCarries },
   { name: "spot-check list", file: "api/review/route.ts", path: () => "/api/review?list=spot-check&pageSize=200", roles: DECIDERS, shows: [], carries: listCarries },
