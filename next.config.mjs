@@ -4,7 +4,8 @@ const nextConfig = {
   // (see the project's STACK notes): bundling them breaks the build or the request.
   // pdfkit reads its standard fonts' metrics (.afm files) from its own folder at run time.
   // tsx and esbuild: lib/ml's training workers load TypeScript through tsx at run time.
-  serverExternalPackages: ["knex", "mysql2", "tesseract.js", "pdf-parse", "wink-nlp", "wink-eng-lite-web-model", "s3rver", "bcryptjs", "tsx", "esbuild", "nodemailer", "smtp-server", "mailparser", "pdfkit"],
+  // @napi-rs/canvas and sharp: native addons (page previews), which Turbopack cannot bundle.
+  serverExternalPackages: ["@napi-rs/canvas", "sharp", "knex", "mysql2", "tesseract.js", "pdf-parse", "wink-nlp", "wink-eng-lite-web-model", "s3rver", "bcryptjs", "tsx", "esbuild", "nodemailer", "smtp-server", "mailparser", "pdfkit"],
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
   // The fixed security headers of every answer (lib/security-headers.ts explains them). Pages get
