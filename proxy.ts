@@ -44,6 +44,7 @@ export async function proxy(request: NextRequest) {
   return response;
 }
 
-// Archive imports stream gigabytes: the proxy would copy the request body into memory (and cut
-// it at 10 MB), so /api/imports goes straight to its route, which checks the session itself.
-export const config = { matcher: ["/((?!_next/static|_next/image|favicon.ico|api/imports).*)"] };
+// Uploads and archive imports stream from the request (to disk and storage): the proxy would first
+// copy the body into memory and cut it at 10 MB (proxyClientMaxBodySize, Next.js docs), so
+// /api/documents and /api/imports go straight to their routes, which check the session themselves.
+export const config = { matcher: ["/((?!_next/static|_next/image|favicon.ico|api/imports|api/documents$).*)"] };

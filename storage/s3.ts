@@ -55,12 +55,12 @@ export interface StoredObjectInfo {
 
 export async function putObject(
   key: string,
-  body: Buffer,
-  options: { contentType: string; metadata?: Record<string, string> },
+  body: Buffer | Readable,
+  options: { contentType: string; metadata?: Record<string, string>; contentLength?: number },
   bucket = env.s3.bucket,
 ): Promise<void> {
   await getS3().send(
-    new PutObjectCommand({ Bucket: bucket, Key: key, Body: body, ContentType: options.contentType, Metadata: options.metadata }),
+    new PutObjectCommand({ Bucket: bucket, Key: key, Body: body, ContentType: options.contentType, Metadata: options.metadata, ContentLength: options.contentLength }),
   );
 }
 

@@ -3,6 +3,7 @@ import "server-only";
 // complete row whose original is safe in the bucket — never a row without its file.
 import crypto from "node:crypto";
 import type { Knex } from "knex";
+import fs from "node:fs";
 import { getDb } from "@/db";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
@@ -14,6 +15,7 @@ import { isDatabaseUnavailable } from "@/db/errors";
 import { deleteObject, isStorageUnavailable, putObject } from "@/storage/s3";
 import { RESTRICTED_NOTE } from "@/lib/data/documents";
 import { READ_JOB } from "@/lib/jobs/kinds";
+import type { SpooledFile } from "@/lib/intake/spool-upload";
 
 export interface DuplicateOf {
   id: number | null; // null when the earlier copy sits in a matter this user may not see
@@ -79,11 +81,14 @@ export interface StoreOptions {
   withRow?: (trx: Knex.Transaction, documentId: number) => Promise<void>;
 }
 
-export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uint8Array, options: StoreOptions = {}): Promise<UploadResult> {
+/** Keeps one file: its bytes (mail intake, imports), or a file a streamed upload spooled to disk. */
+export async function storeUpload(user: CurrentUser, rawName: string, source: Uint8Array | SpooledFile, options: StoreOptions = {}): Promise<UploadResult> {
   const name = cleanFileName(rawName);
-  const sniff = await sniffFile(bytes, name, { maxBytes: env.uploadMaxBytes });
+  const spooled = source instanceof Uint8Array ? null : source;
+  const sniff = await sniffFile(source, name, { maxBytes: env.uploadMaxBytes });
   if (!sniff.ok) return rejected(name, sniff.error);
-  const sha256 = sha256Hex(bytes);
+  const sha256 = spooled ? spooled.sha256 : sha256Hex(source as Uint8Array);
+  const size = spooled ? spooled.size : (source as Uint8Array).byteLength;
 
   const known = await describeDuplicate(user, sha256).catch((e) => {
     throw databaseFailure("checking for a duplicate", e);
@@ -93,7 +98,8 @@ export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uin
   const now = new Date();
   const key = `originals/${now.getUTCFullYear()}/${String(now.getUTCMonth() + 1).padStart(2, "0")}/${crypto.randomUUID()}`;
   try {
-    await putObject(key, Buffer.from(bytes), {
+    await putObject(key, spooled ? fs.createReadStream(spooled.path) : Buffer.from(source as Uint8Array), {
+      contentLength: size,
       contentType: sniff.mediaType,
       metadata: { sha256, "original-name": encodeURIComponent(name), "uploaded-by": String(user.id) },
     });
@@ -111,7 +117,7 @@ export async function storeUpload(user: CurrentUser, rawName: string, bytes: Uin
         sha256,
         original_name: name,
         media_type: sniff.mediaType,
-        size_bytes: bytes.byteLength,
+        size_bytes: size,
         storage_key: key,
         status: "reading",
         uploaded_by: user.id,

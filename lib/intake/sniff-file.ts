@@ -1,4 +1,4 @@
-import { fileTypeFromBuffer } from "file-type";
+import { fileTypeFromBuffer, fileTypeFromFile } from "file-type";
 import { ACCEPTED_KINDS, ACCEPTED_SENTENCE } from "./file-kinds";
 import { formatSize } from "./format-size";
 import { describeRejectedKind } from "./rejected-kinds";
@@ -22,15 +22,19 @@ const NAMED_KINDS: Record<string, { kind: FileKind; label: string }> = {
  * keep with a status for the route (413, 415, 422) and a sentence the clerk can act on.
  */
 export async function sniffFile(
-  bytes: Uint8Array,
+  bytes: Uint8Array | { path: string; size: number; head: Uint8Array },
   originalName: string,
   options: { maxBytes?: number } = {},
 ): Promise<SniffResult> {
-  const sizeError = checkFileSize(bytes.byteLength, options.maxBytes ?? DEFAULT_MAX_UPLOAD_BYTES);
+  // A file spooled to disk (a streamed upload) is sniffed from the disk, reading only what is needed.
+  const onDisk = bytes instanceof Uint8Array ? null : bytes;
+  const sizeError = checkFileSize(onDisk ? onDisk.size : (bytes as Uint8Array).byteLength, options.maxBytes ?? DEFAULT_MAX_UPLOAD_BYTES);
   if (sizeError) return { ok: false, error: sizeError };
 
   const claimed = NAMED_KINDS[readExtension(originalName)];
-  const detected = (await fileTypeFromBuffer(bytes)) ?? detectLatePdfHeader(bytes);
+  const detected = onDisk
+    ? ((await fileTypeFromFile(onDisk.path)) ?? detectLatePdfHeader(onDisk.head))
+    : ((await fileTypeFromBuffer(bytes as Uint8Array)) ?? detectLatePdfHeader(bytes as Uint8Array));
   if (!detected) return { ok: false, error: describeUnknown(claimed?.label) };
 
   const kind = (Object.keys(ACCEPTED_KINDS) as FileKind[]).find(

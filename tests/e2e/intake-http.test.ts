@@ -85,14 +85,14 @@ describe("intake bad-input matrix", () => {
       "This file is a Linux program, not a document, even though its name ends in .pdf. Foldwright keeps PDF, Word (.docx), PNG, JPEG and TIFF files. Do not open it; ask the sender what they meant to send.",
     ));
 
-  it("refuses a file over the size limit (UPLOAD_MAX_BYTES = 2 MB in the tests)", () =>
-    expectRefused(
-      "big.pdf",
-      Buffer.concat([Buffer.from("%PDF-1.7\n"), Buffer.alloc(3 * 1024 * 1024 - 9, 32)]),
-      413,
-      "too_large",
-      "This file is 3 MB, more than the 2 MB Foldwright takes in one file. Split it into smaller files, or scan at a lower resolution, and upload those.",
-    ));
+  // The whole upload is refused as it streams in (tests/e2e/upload-stream.test.ts has the rest).
+  it("refuses a file over the size limit (UPLOAD_MAX_BYTES = 2 MB in the tests)", async () => {
+    const before = await counts();
+    const r = await upload("big.pdf", Buffer.concat([Buffer.from("%PDF-1.7\n"), Buffer.alloc(3 * 1024 * 1024 - 9, 32)]));
+    expect(r.status).toBe(413);
+    expect(r.body.error).toMatchObject({ code: "too_large", message: expect.stringMatching(/larger than the 2 MB Foldwright takes/) });
+    expect(await counts()).toEqual(before);
+  });
 
   it("keeps a truncated PDF and marks it unreadable", async () => {
     const pdf = await makeTextPdf([[`Lease schedule ${Date.now()}`, "Rent review every five years"]]);
@@ -118,8 +118,16 @@ describe("intake bad-input matrix", () => {
     await expectKeptButUnreadable("minutes.docx", bomb, /^This Word file .*far beyond any real document, so Foldwright did not open it: it may be damaged or made to cause harm\. The original is kept/);
   });
 
-  it("cleans a file name with path separators, control characters and 300 characters", async () => {
-    const name = `..\\..//etc/pass\u0007wd-${"x".repeat(300)}.pdf`;
+  // Control characters in a name are cleaned by cleanFileName (tests/unit/intake/clean-file-name.test.ts);
+  // over HTTP the multipart reader refuses them in a part header (below).
+  it("refuses a file name with a control character with a sentence (400)", async () => {
+    const r = await upload("pass\u0007wd.pdf", await makeTextPdf([[`Name test ${Date.now()}`]]));
+    expect(r.status).toBe(400);
+    expect(r.body.error.message).toMatch(/control characters/);
+  });
+
+  it("cleans a file name with path separators and 300 characters", async () => {
+    const name = `..\\..//etc/passwd-${"x".repeat(300)}.pdf`;
     const r = await upload(name, await makeTextPdf([[`Name test ${Date.now()}`]]));
     expect(r.status).toBe(201);
     const stored: string = r.body.files[0].name;

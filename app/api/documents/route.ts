@@ -6,6 +6,10 @@ import { requireUser } from "@/lib/data/current-user";
 import { listDocuments } from "@/lib/data/documents";
 import { storeUpload, type UploadResult } from "@/lib/data/intake";
 import { documentListSchema } from "@/lib/validations/documents";
+import { spoolUpload } from "@/lib/intake/spool-upload";
+import { formatSize } from "@/lib/intake/format-size";
+
+const MULTIPART_SLACK = 1024 * 1024;
 
 export const dynamic = "force-dynamic";
 
@@ -33,23 +37,20 @@ export const POST = handle(async (request: Request) => {
   if (!(request.headers.get("content-type") ?? "").startsWith("multipart/form-data")) {
     throw new AppError(415, "not_multipart", "Send the files as multipart/form-data, one or more fields named \"file\".");
   }
+  // UPLOAD_MAX_BYTES of files per request, plus room for the multipart framing of each part.
   const declared = Number(request.headers.get("content-length") ?? 0);
-  if (declared > env.uploadMaxBytes * env.uploadMaxFiles + 1024 * 1024) {
-    throw new AppError(413, "too_large", `This upload is larger than Foldwright accepts at once. Send at most ${env.uploadMaxFiles} files of up to ${Math.round(env.uploadMaxBytes / 1048576)} MB each.`);
+  if (declared > env.uploadMaxBytes + MULTIPART_SLACK) {
+    throw new AppError(413, "too_large", `This upload is larger than the ${formatSize(env.uploadMaxBytes)} Foldwright takes at once, so nothing was kept. Upload the files in smaller groups, each file under ${formatSize(env.uploadMaxBytes)}.`);
   }
-  let form: FormData;
-  try {
-    form = await request.formData();
-  } catch {
-    throw new AppError(400, "bad_form", "The upload could not be read. Send the files again as multipart/form-data fields named \"file\".");
-  }
-  const files = form.getAll("file").filter((f): f is File => typeof f === "object" && f !== null && "arrayBuffer" in f);
-  if (files.length === 0) throw new AppError(422, "no_files", "No files came with this upload. Add one or more fields named \"file\".");
-  if (files.length > env.uploadMaxFiles) {
-    throw new AppError(413, "too_many_files", `At most ${env.uploadMaxFiles} files go in one upload. Split the rest into another upload.`);
-  }
+  // Streamed to disk as it arrives (this path is outside proxy.ts, whose body copy stops at 10 MB).
+  const { files, dispose } = await spoolUpload(request, { maxBytes: env.uploadMaxBytes, maxFiles: env.uploadMaxFiles });
   const results: UploadResult[] = [];
-  for (const file of files) results.push(await storeUpload(user, file.name, new Uint8Array(await file.arrayBuffer())));
+  try {
+    if (files.length === 0) throw new AppError(422, "no_files", "No files came with this upload. Add one or more fields named \"file\".");
+    for (const file of files) results.push(await storeUpload(user, file.name, file));
+  } finally {
+    await dispose();
+  }
   const statuses = new Set(results.map((r) => r.httpStatus));
   const status = statuses.size === 1 ? results[0].httpStatus : 200;
   return NextResponse.json({ files: results.map(({ httpStatus, ...r }) => ({ ...r, httpStatus })) }, { status });
