@@ -11,6 +11,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { CountMatrixBuilder, decodeTermCounts, TOKENIZER_VERSION, type CountMatrix } from "@/lib/ml";
+import type { TypePrior } from "@/lib/ml/model-features";
 import { findDocumentsNeedingTerms, tokenizeDocuments, TOKENIZE_BATCH } from "@/lib/data/document-terms";
 
 /** Rows per streamed batch. */
@@ -65,4 +66,21 @@ export async function loadTrainingCounts(batchSize = TRAINING_BATCH): Promise<Tr
     after = rows[rows.length - 1].id;
   }
   return { matrix: builder.build(), labels, documentIds, tokenizedNow };
+}
+
+/** Every cabinet type's name, description and keywords, labelled as the training set is (by id). */
+export async function loadTypePriors(): Promise<TypePrior[]> {
+  const rows: { id: number; name: string; description: string | null; keywords: string | string[] | null }[] = await getDb()("cabinet_types")
+    .select("id", "name", "description", "keywords")
+    .orderBy("id");
+  return rows.map((r) => {
+    let keywords: string[] = [];
+    try {
+      const parsed: unknown = typeof r.keywords === "string" ? JSON.parse(r.keywords) : r.keywords;
+      if (Array.isArray(parsed)) keywords = parsed.filter((k): k is string => typeof k === "string");
+    } catch {
+      keywords = [];
+    }
+    return { label: String(r.id), name: r.name, description: r.description ?? "", keywords };
+  });
 }

@@ -18,7 +18,7 @@ import {
 } from "@/lib/data/models";
 import { getOfficeSettings } from "@/lib/data/settings";
 import { FOLDWRIGHT } from "@/lib/data/users";
-import { loadTrainingCounts } from "@/lib/data/training-set";
+import { loadTrainingCounts, loadTypePriors } from "@/lib/data/training-set";
 import { resolveOptions, saveModel, trainOnCounts, type TrainOptionsInput } from "@/lib/ml";
 import { putObject } from "@/storage/s3";
 import { chooseFolds, describeEvaluation, scoreOnFolds } from "@/lib/learning/evaluate-candidate";
@@ -86,7 +86,9 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}, 
       }
       const folds = chooseFolds(labels);
       await progress(`Evaluating by ${describeEvaluation(rows.length, folds)}`);
-      const report = await scoreOnFolds(set.matrix, rows, labelOf, folds, DEFAULT_PARAMS, settings.autoFileTarget);
+      // The types' own names, descriptions and keywords: prior knowledge beside the examples.
+      const priors = await loadTypePriors();
+      const report = await scoreOnFolds(set.matrix, rows, labelOf, folds, { ...DEFAULT_PARAMS, priors }, settings.autoFileTarget);
 
       const current = await findCurrentModelParams();
       let compared: number | null = null;
@@ -95,12 +97,12 @@ export async function runTraining(versionId: number, hooks: TrainingHooks = {}, 
         if (sameSettings) compared = report.macroF1;
         else {
           await progress("Scoring the current model's settings on the same folds");
-          compared = (await scoreOnFolds(set.matrix, rows, truth, folds, current.params as TrainOptionsInput, settings.autoFileTarget)).macroF1;
+          compared = (await scoreOnFolds(set.matrix, rows, truth, folds, { ...(current.params as TrainOptionsInput), priors }, settings.autoFileTarget)).macroF1;
         }
       }
 
       await progress("Training on all documents");
-      const model = await trainOnCounts(set.matrix, rows, labels, DEFAULT_PARAMS);
+      const model = await trainOnCounts(set.matrix, rows, labels, { ...DEFAULT_PARAMS, priors });
       model.metrics = report;
       const bytes = saveModel(model);
       const key = `models/version-${versionId}-${Date.now()}.bin`;

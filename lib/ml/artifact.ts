@@ -109,7 +109,7 @@ export function loadModel(bytes: Uint8Array): FoldwrightModel {
     formatVersion: header.formatVersion,
     classes: header.classes,
     terms,
-    vocabulary: { terms, idf, index: indexTerms(terms) },
+    vocabulary: { terms, idf, index: indexTerms(terms), ...(header.options.tfidf.headingWeight !== undefined ? { headingWeight: header.options.tfidf.headingWeight } : {}) },
     weights: new Float32Array(block("weights")),
     intercepts: new Float64Array(block("intercepts")),
     options: header.options,

@@ -4,13 +4,16 @@
 //   classifier train --train A.jsonl --out model.bin [--folds 5]
 //   classifier predict --model model.bin --in B.jsonl --out preds.jsonl
 // Common options: --C, --min-df, --max-df, --max-features, --balanced, --threads, --floor,
-// --target. Results are JSON on stdout; bad input is one line on stderr and exit status 2.
+// --target. Labels are read as the cabinet types' names and used as the product uses types'
+// names (model-features.ts), so evaluate measures what the product serves. Results are JSON on stdout; bad input is one line on stderr and exit status 2.
 import fs from "node:fs";
 import { parseArgs } from "node:util";
 import { crossValidate, evaluateSplit, type EvaluationOptions } from "./evaluate";
 import { InputError, readJsonl, readTrainingJsonl } from "./jsonl";
 import { loadModel, saveModel } from "./artifact";
 import { predictDocuments, trainModel } from "./model";
+import { priorsFromLabels } from "./model-features";
+import type { LabelledDocument } from "./types";
 
 const USAGE = "usage: classifier evaluate|train|predict [options] (see lib/ml/cli.ts)";
 
@@ -52,19 +55,26 @@ function readOptions(values: Values): EvaluationOptions {
   };
 }
 
+/** The product's priors: here the labels are the cabinet types' names. */
+function withPriors(options: EvaluationOptions, docs: LabelledDocument[]): EvaluationOptions {
+  return { ...options, priors: priorsFromLabels(docs.map((d) => d.label)) };
+}
+
 /** Runs one command; returns what to print on stdout. */
 async function runCommand(command: string, values: Values): Promise<unknown> {
-  const options = readOptions(values);
+  let options = readOptions(values);
   if (command === "evaluate") {
     if (values.data !== undefined) {
       const folds = readNumber(values, "folds") ?? 5;
-      return crossValidate(readTrainingJsonl(requireOption(values, "data")), folds, options);
+      const docs = readTrainingJsonl(requireOption(values, "data"));
+      return crossValidate(docs, folds, withPriors(options, docs));
     }
     const train = readTrainingJsonl(requireOption(values, "train"));
-    return evaluateSplit(train, readJsonl(requireOption(values, "test"), true), options);
+    return evaluateSplit(train, readJsonl(requireOption(values, "test"), true), withPriors(options, train));
   }
   if (command === "train") {
     const train = readTrainingJsonl(requireOption(values, "train"));
+    options = withPriors(options, train);
     const out = requireOption(values, "out");
     const folds = readNumber(values, "folds");
     const model = await trainModel(train, options);

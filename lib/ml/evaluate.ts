@@ -112,7 +112,7 @@ export async function crossValidateCounts(m: CountMatrix, rowIds: ArrayLike<numb
     const trainAt: number[] = [];
     const testAt: number[] = [];
     for (let i = 0; i < labels.length; i++) (foldOf[i] !== f ? trainAt : testAt).push(i);
-    const model = await trainOnCounts(m, trainAt.map((i) => rowIds[i]), trainAt.map((i) => labels[i]), resolved);
+    const model = await trainOnCounts(m, trainAt.map((i) => rowIds[i]), trainAt.map((i) => labels[i]), { ...resolved, priors: options.priors });
     const t0 = performance.now();
     const x = transformCountRows(m, testAt.map((i) => rowIds[i]), columnsUnder(m, model.vocabulary), model.vocabulary);
     const t1 = performance.now();

@@ -37,6 +37,8 @@ export interface LogisticOptions {
   maxIterations: number;
   /** Weigh each side by rows / (2 · rows of that side), like scikit-learn's class_weight="balanced". */
   balanced: boolean;
+  /** A weight per row (scikit-learn's sample_weight): cᵢ = C · class weight · rowWeights[i]. */
+  rowWeights?: Float64Array;
 }
 
 export const DEFAULT_LOGISTIC_OPTIONS: LogisticOptions = { C: 10, tolerance: 1e-3, maxIterations: 200, balanced: false };
@@ -55,6 +57,9 @@ export function checkLogisticOptions(o: LogisticOptions): void {
   if (!(Number.isInteger(o.maxIterations) && o.maxIterations >= 1)) {
     throw new Error(`maxIterations must be a whole number ≥ 1, got ${o.maxIterations}.`);
   }
+  if (o.rowWeights !== undefined && !o.rowWeights.every((w) => w > 0 && Number.isFinite(w))) {
+    throw new Error("Every row weight must be a positive number.");
+  }
 }
 
 /** Checks one binary problem and returns its solver (a generator of sparse products). */
@@ -65,6 +70,7 @@ export function createBinarySolver(
 ): ProductSolver<BinaryModel> {
   checkLogisticOptions(options);
   if (positive.length !== x.rows) throw new Error("There must be one label per row.");
+  if (options.rowWeights !== undefined && options.rowWeights.length !== x.rows) throw new Error("There must be one row weight per row.");
   let pos = 0;
   for (let i = 0; i < positive.length; i++) pos += positive[i];
   const neg = x.rows - pos;
@@ -78,9 +84,10 @@ function* solveBinary(x: CsrMatrix, positive: Uint8Array, pos: number, options: 
   const cost = new Float64Array(x.rows);
   const posWeight = options.balanced ? x.rows / (2 * pos) : 1;
   const negWeight = options.balanced ? x.rows / (2 * neg) : 1;
+  const rowWeights = options.rowWeights;
   for (let i = 0; i < x.rows; i++) {
     y[i] = positive[i] ? 1 : -1;
-    cost[i] = options.C * (positive[i] ? posWeight : negWeight);
+    cost[i] = options.C * (positive[i] ? posWeight : negWeight) * (rowWeights === undefined ? 1 : rowWeights[i]);
   }
   const loss = createLogisticLoss({ x, y, cost });
   const n = x.cols;

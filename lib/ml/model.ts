@@ -4,9 +4,10 @@ import type { CsrMatrix } from "./csr";
 import { DEFAULT_LOGISTIC_OPTIONS } from "./logistic";
 import { chooseThreads, trainOneVsRest, warmUpWorkers } from "./one-vs-rest";
 import { predictRows, type LinearClassifier, type Prediction } from "./predict";
-import { transformTokens, DEFAULT_TFIDF_OPTIONS, type TfidfOptions, type TfidfVocabulary } from "./tfidf";
-import { allRows, countMatrixOf, fitCountVocabulary, transformCountRows, transformCounts, type CountMatrix, type TermCounts } from "./term-counts";
-import { tokenizeDocument, DEFAULT_TOKENIZE_OPTIONS, type TokenizeOptions } from "./tokenize";
+import { transformTokens, type TfidfOptions, type TfidfVocabulary } from "./tfidf";
+import { allRows, appendPriorRows, countMatrixOf, fitCountVocabulary, transformCountRows, transformCounts, type CountMatrix, type TermCounts } from "./term-counts";
+import { tokenizeDocument, type TokenizeOptions } from "./tokenize";
+import { DEFAULT_PRIOR_WEIGHT, MODEL_TFIDF_OPTIONS, MODEL_TOKENIZE_OPTIONS, type TypePrior } from "./model-features";
 import type { LabelledDocument, MlDocument } from "./types";
 import { checkDocument, checkLabels, checkTrainingSet } from "./validate";
 
@@ -40,11 +41,15 @@ export interface TrainOptions {
   threads: number;
   /** Confidence below which a prediction says "no confident match". */
   floor: number;
+  /** Weight of each cabinet type's pseudo-example built from `priors` (model-features.ts). */
+  priorWeight: number;
 }
 
 export interface TrainOptionsInput extends Partial<Omit<TrainOptions, "tokenize" | "tfidf">> {
   tokenize?: Partial<TokenizeOptions>;
   tfidf?: Partial<TfidfOptions>;
+  /** The cabinet types' names, descriptions and keywords (not stored in the model's options). */
+  priors?: TypePrior[];
 }
 
 export interface FoldwrightModel extends LinearClassifier {
@@ -70,8 +75,9 @@ export function resolveOptions(input: TrainOptionsInput = {}): TrainOptions {
     balanced: input.balanced ?? DEFAULT_LOGISTIC_OPTIONS.balanced,
     threads: input.threads ?? chooseThreads(),
     floor: input.floor ?? 0.25,
-    tokenize: { ...DEFAULT_TOKENIZE_OPTIONS, ...input.tokenize },
-    tfidf: { ...DEFAULT_TFIDF_OPTIONS, ...input.tfidf },
+    priorWeight: input.priorWeight ?? DEFAULT_PRIOR_WEIGHT,
+    tokenize: { ...MODEL_TOKENIZE_OPTIONS, ...input.tokenize },
+    tfidf: { ...MODEL_TFIDF_OPTIONS, ...input.tfidf },
   };
 }
 
@@ -105,7 +111,7 @@ export async function trainModel(
   const t0 = performance.now();
   const counts = countMatrixOf(docs, options.tokenize);
   const tokenizeMs = performance.now() - t0;
-  const model = await trainOnCounts(counts, allRows(counts.rows), docs.map((d) => d.label), options);
+  const model = await trainOnCounts(counts, allRows(counts.rows), docs.map((d) => d.label), { ...options, priors: input.priors });
   model.timings.vectoriseMs += tokenizeMs;
   return model;
 }
@@ -125,12 +131,18 @@ export async function trainOnCounts(
   const classes = [...new Set(labels)].sort();
   warmUpWorkers(Math.min(options.threads, classes.length));
   const t0 = performance.now();
-  const { vocabulary, columnOf } = fitCountVocabulary(m, rowIds, options.tfidf);
-  const x = transformCountRows(m, rowIds, columnOf, vocabulary);
+  // The types' own words as weighted pseudo-rows, for the types being learned only.
+  const prior = options.priorWeight > 0 && input.priors !== undefined ? appendPriorRows(m, rowIds, labels, input.priors, classes, options.tokenize) : null;
+  const matrix = prior?.matrix ?? m;
+  const rows = prior?.rowIds ?? rowIds;
+  const rowLabels = prior?.labels ?? labels;
+  const { vocabulary, columnOf } = fitCountVocabulary(matrix, rows, options.tfidf);
+  const x = transformCountRows(matrix, rows, columnOf, vocabulary);
   const t1 = performance.now();
   const classIndex = new Map(classes.map((c, k) => [c, k]));
-  const labelIds = Int32Array.from(labels, (l) => classIndex.get(l)!);
-  const ovr = await trainOneVsRest(x, labelIds, classes.length, options);
+  const labelIds = Int32Array.from(rowLabels, (l) => classIndex.get(l)!);
+  const rowWeights = prior ? Float64Array.from(rowLabels, (_, i) => (i < labels.length ? 1 : options.priorWeight)) : undefined;
+  const ovr = await trainOneVsRest(x, labelIds, classes.length, { ...options, rowWeights });
   const t2 = performance.now();
   const counts: Record<string, number> = {};
   for (const l of labels) counts[l] = (counts[l] ?? 0) + 1;

@@ -14,16 +14,17 @@
 // its own idf or weight can split the counts by that prefix. Either way TOKENIZER_VERSION goes up,
 // and the app re-tokenises stored documents in the background.
 import type { CsrMatrix } from "./csr";
-import { DEFAULT_TFIDF_OPTIONS, indexTerms, type TfidfOptions, type TfidfVocabulary } from "./tfidf";
-import { DEFAULT_TOKENIZE_OPTIONS, tokenizeDocument, type TokenizeOptions } from "./tokenize";
+import { buildPriorDocuments, MODEL_TOKENIZE_OPTIONS, type TypePrior } from "./model-features";
+import { DEFAULT_TFIDF_OPTIONS, headingColumns, indexTerms, weighHeadingBlock, type TfidfOptions, type TfidfVocabulary } from "./tfidf";
+import { DEFAULT_TOKENIZE_OPTIONS, HEADING_PREFIX, tokenizeDocument, type TokenizeOptions } from "./tokenize";
 import type { MlDocument } from "./types";
 import { checkDocument } from "./validate";
 
 /** Term → how often it occurs in one document. */
 export type TermCounts = Map<string, number>;
 
-/** Counts one document's feature tokens (the stored form of a read document). */
-export function countTerms(doc: MlDocument, options: TokenizeOptions = DEFAULT_TOKENIZE_OPTIONS): TermCounts {
+/** Counts one document's feature tokens (the stored form of a read document: the product's tokenizer options, heading block included). */
+export function countTerms(doc: MlDocument, options: TokenizeOptions = MODEL_TOKENIZE_OPTIONS): TermCounts {
   checkDocument(doc, "The document");
   return countTokenList(tokenizeDocument(doc, options));
 }
@@ -150,7 +151,10 @@ export function fitCountVocabulary(m: CountMatrix, rowIds: ArrayLike<number>, op
   }
   const maxDocs = Math.floor(options.maxDf * n + 1e-9);
   let kept: number[] = [];
-  for (let id = 0; id < df.length; id++) if (df[id] >= options.minDf && df[id] <= maxDocs) kept.push(id);
+  const headingMinDf = options.headingMinDf ?? options.minDf;
+  for (let id = 0; id < df.length; id++) {
+    if (df[id] >= (m.terms[id].startsWith(HEADING_PREFIX) ? headingMinDf : options.minDf) && df[id] <= maxDocs) kept.push(id);
+  }
   if (kept.length > options.maxFeatures) {
     kept.sort((a, b) => total[b] - total[a] || compareTerms(m.terms[a], m.terms[b]));
     kept = kept.slice(0, options.maxFeatures);
@@ -166,7 +170,9 @@ export function fitCountVocabulary(m: CountMatrix, rowIds: ArrayLike<number>, op
     idf[j] = Math.log((1 + n) / (1 + df[id])) + 1;
     columnOf[id] = j;
   });
-  return { vocabulary: { terms, idf, index: indexTerms(terms) }, columnOf };
+  const vocabulary: TfidfVocabulary = { terms, idf, index: indexTerms(terms) };
+  if (options.headingWeight !== undefined) vocabulary.headingWeight = options.headingWeight;
+  return { vocabulary, columnOf };
 }
 
 /** The dictionary id → column map of a CountMatrix under a vocabulary fitted elsewhere (a trained model's). */
@@ -211,7 +217,9 @@ export function transformCountRows(m: CountMatrix, rowIds: ArrayLike<number>, co
     norm = Math.sqrt(norm);
     for (let p = 0; p < len; p++) data[base + p] = data[base + p] / norm;
   }
-  return { rows: rowIds.length, cols: vocabulary.terms.length, indptr, indices, data };
+  const x: CsrMatrix = { rows: rowIds.length, cols: vocabulary.terms.length, indptr, indices, data };
+  if (vocabulary.headingWeight !== undefined) weighHeadingBlock(x, headingColumns(vocabulary), vocabulary.headingWeight);
+  return x;
 }
 
 /** TF-IDF rows of stored counts under a trained vocabulary (suggesting from stored counts). */
@@ -225,4 +233,70 @@ export function transformCounts(counts: TermCounts[], vocabulary: TfidfVocabular
 /** 0, 1, …, n − 1. */
 export function allRows(n: number): Int32Array {
   return Int32Array.from({ length: n }, (_, i) => i);
+}
+
+/**
+ * The training rows plus one pseudo-row per cabinet type being learned (its name, description and
+ * keywords; model-features.ts), in a CountMatrix that extends `m` (m itself is not changed).
+ */
+export function appendPriorRows(
+  m: CountMatrix,
+  rowIds: ArrayLike<number>,
+  labels: string[],
+  priors: TypePrior[],
+  classes: string[],
+  options: TokenizeOptions,
+): { matrix: CountMatrix; rowIds: Int32Array; labels: string[] } | null {
+  const known = new Set(classes);
+  const docs = buildPriorDocuments(priors.filter((p) => known.has(p.label)));
+  if (docs.length === 0) return null;
+  const index = new Map<string, number>();
+  const extraIds: number[] = [];
+  const extraCounts: number[] = [];
+  const extraPtr: number[] = [];
+  for (const d of docs) {
+    for (const [t, c] of countTokenList(tokenizeDocument(d, options))) {
+      let id = index.get(t);
+      if (id === undefined) {
+        id = index.size;
+        index.set(t, id);
+      }
+      extraIds.push(id);
+      extraCounts.push(c);
+    }
+    extraPtr.push(extraIds.length);
+  }
+  // New terms first get ids of their own; map those that the dictionary already had back to theirs.
+  const old = new Map<string, number>();
+  const want = new Set(index.keys());
+  m.terms.forEach((t, id) => {
+    if (want.has(t)) old.set(t, id);
+  });
+  const finalTerms = m.terms.slice();
+  const remap = new Map<number, number>();
+  for (const [t, id] of index) {
+    const existing = old.get(t);
+    if (existing !== undefined) remap.set(id, existing);
+    else {
+      remap.set(id, finalTerms.length);
+      finalTerms.push(t);
+    }
+  }
+  const nnz = m.indptr[m.rows];
+  const ids = new Int32Array(nnz + extraIds.length);
+  const counts = new Int32Array(nnz + extraIds.length);
+  ids.set(m.ids.subarray(0, nnz));
+  counts.set(m.counts.subarray(0, nnz));
+  extraIds.forEach((id, k) => {
+    ids[nnz + k] = remap.get(id)!;
+    counts[nnz + k] = extraCounts[k];
+  });
+  const indptr = new Int32Array(m.rows + docs.length + 1);
+  indptr.set(m.indptr.subarray(0, m.rows + 1));
+  extraPtr.forEach((p, r) => (indptr[m.rows + 1 + r] = nnz + p));
+  const matrix: CountMatrix = { rows: m.rows + docs.length, terms: finalTerms, indptr, ids, counts };
+  const all = new Int32Array(rowIds.length + docs.length);
+  for (let i = 0; i < rowIds.length; i++) all[i] = rowIds[i];
+  for (let r = 0; r < docs.length; r++) all[rowIds.length + r] = m.rows + r;
+  return { matrix, rowIds: all, labels: [...labels, ...docs.map((d) => d.label)] };
 }

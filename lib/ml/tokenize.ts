@@ -1,7 +1,8 @@
 // Text → tokens for the vectoriser (DESIGN.md §5): wink-nlp with wink-eng-lite-web-model, lower
 // case, only word tokens that contain a letter, stop words out, Porter stems via wink's `its.stem`,
-// unigrams plus bigrams of neighbouring kept words, and prefixed filename (`file:`) and metadata
-// (`meta:`) tokens so a filename word never collides with the same word in the text.
+// unigrams plus bigrams of neighbouring kept words, and prefixed filename (`file:`), metadata
+// (`meta:`) and, when asked, heading (`head:`) tokens so a filename or heading word never
+// collides with the same word in the body.
 import winkNLP from "wink-nlp";
 import model from "wink-eng-lite-web-model";
 import type { MlDocument } from "./types";
@@ -12,7 +13,7 @@ import type { MlDocument } from "./types";
  * the app keeps each document's term counts with this number and re-tokenises, in the background,
  * every document whose counts carry another (lib/data/document-terms.ts).
  */
-export const TOKENIZER_VERSION = 1;
+export const TOKENIZER_VERSION = 2;
 
 export interface TokenizeOptions {
   /** Drop wink's stop words (default true). */
@@ -25,6 +26,11 @@ export interface TokenizeOptions {
   stopWordsInBigrams: boolean;
   /** Treat negations (not, no, nor, never, …) as ordinary words. */
   keepNegations: boolean;
+  /**
+   * Characters of the document's start that form its heading block (`head:` terms; see
+   * model-features.ts). 0 or absent: no heading block (models trained before it have none).
+   */
+  headingChars?: number;
 }
 
 // Stop words leave the unigrams but stay inside bigrams, and negations stay words: on the CUAD
@@ -99,6 +105,25 @@ export function buildTerms(words: string[], stop: boolean[], options: TokenizeOp
   return out;
 }
 
+/** Prefix of the heading block's terms: "head:agreement" never meets the body's "agreement". */
+export const HEADING_PREFIX = "head:";
+/** The heading block needs a text at least this many times longer than the heading. */
+export const HEADING_BODY_RATIO = 3;
+
+/**
+ * The heading a document's kind is read from: the reader's own heading when it has one (e.g. the
+ * largest-type lines of a PDF's first page), else the text's first `chars` characters, cut back
+ * to a word boundary.
+ */
+export function headingText(doc: MlDocument, chars: number): string {
+  if (doc.heading !== undefined && doc.heading.trim() !== "") return doc.heading.slice(0, chars * 2);
+  const text = doc.text;
+  if (text.length <= chars) return text;
+  const cut = text.slice(0, chars);
+  const space = cut.search(/\s\S*$/);
+  return space > chars / 2 ? cut.slice(0, space) : cut;
+}
+
 /** Buckets the page count so one-page letters and long contracts get different tokens. */
 export function bucketPages(pages: number): string {
   if (pages <= 1) return "1";
@@ -118,6 +143,14 @@ export function tokenizeDocument(doc: MlDocument, options: TokenizeOptions = DEF
     fileWords.words.forEach((w, i) => {
       if (!(options.dropStopWords && fileWords.stop[i])) out.push(`file:${w}`);
     });
+  }
+  const headingChars = options.headingChars ?? 0;
+  // A text not much longer than its heading has no separate heading (a clause, a short note):
+  // a block over it would only repeat the body (on the CUAD clause spans it cost 0.6 points of
+  // accuracy and 2.2 of macro-F1). A reader's own heading always counts.
+  if (headingChars > 0 && (doc.heading !== undefined || doc.text.length > HEADING_BODY_RATIO * headingChars)) {
+    const heading = extractWords(headingText(doc, headingChars), options);
+    for (const t of buildTerms(heading.words, heading.stop, options)) out.push(HEADING_PREFIX + t);
   }
   const meta = doc.meta;
   if (meta?.kind) out.push(`meta:kind=${meta.kind.toLowerCase()}`);

@@ -6,6 +6,8 @@ export interface MlDocument {
   text: string;
   filename?: string;
   meta?: DocumentMeta;
+  /** The reader's heading (e.g. a PDF's largest-type first-page lines); else the text's start is used. */
+  heading?: string;
 }
 
 /** A few facts about the file that carry signal beyond its words. */

@@ -6,6 +6,7 @@ export function checkDocument(doc: MlDocument, where: string): void {
   if (doc === null || typeof doc !== "object") throw new Error(`${where} is not an object.`);
   if (typeof doc.text !== "string") throw new Error(`${where} has no text.`);
   if (doc.filename !== undefined && typeof doc.filename !== "string") throw new Error(`${where} has a filename that is not text.`);
+  if (doc.heading !== undefined && typeof doc.heading !== "string") throw new Error(`${where} has a heading that is not text.`);
   const pages = doc.meta?.pages;
   if (pages !== undefined && !(typeof pages === "number" && Number.isFinite(pages) && pages >= 0)) {
     throw new Error(`${where} has a page count that is not a number ≥ 0 (${String(pages)}).`);

@@ -67,7 +67,7 @@ describe("term counts", () => {
     const whole = await trainModel(train, { threads: 1 });
     // The reference: the token path of tfidf.ts (checked against scikit-learn in tfidf.test.ts)
     // on the whole set at once, into the same one-vs-rest solver.
-    const tokens = train.map((d) => tokenizeDocument(d));
+    const tokens = train.map((d) => tokenizeDocument(d, whole.options.tokenize));
     const vocab = fitVocabulary(tokens, whole.options.tfidf);
     const classes = [...new Set(train.map((d) => d.label))].sort();
     const reference = await trainOneVsRest(transformTokens(tokens, vocab), Int32Array.from(train, (d) => classes.indexOf(d.label)), classes.length, whole.options);
