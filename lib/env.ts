@@ -108,7 +108,25 @@ export const env = {
     maxFailures: int("SIGN_IN_MAX_FAILURES", 5),
     lockMinutes: int("SIGN_IN_LOCK_MINUTES", 15),
     bcryptCost: int("BCRYPT_COST", 11),
+    /** Wrong sign-ins from one client address (over any accounts) per SIGN_IN_LOCK_MINUTES. */
+    addressMaxFailures: int("SIGN_IN_ADDRESS_MAX_FAILURES", 30),
   },
+  /** Rate limits kept in MariaDB (lib/data/rate-limit.ts), shared by every instance. */
+  limits: {
+    /** Password-reset e-mails asked for one address per hour (known or not: the answer is the same). */
+    resetRequestsPerAccount: int("RESET_REQUESTS_PER_HOUR", 3),
+    /** Reset requests, reset and invitation attempts from one client address per hour. */
+    linkAttemptsPerAddress: int("LINK_ATTEMPTS_PER_ADDRESS_PER_HOUR", 30),
+    /** Attempts to set a password through one link per hour (a rule refused, a retry). */
+    attemptsPerLink: int("ATTEMPTS_PER_LINK_PER_HOUR", 10),
+    /** Upload requests per person per minute: far above a clerk's drops, below a runaway script. */
+    uploadsPerMinute: int("UPLOADS_PER_MINUTE", 600),
+  },
+  /**
+   * Proxies in front of the app that append the client's address to X-Forwarded-For. 0: the
+   * address is the connection's own and X-Forwarded-For sent by a client is ignored.
+   */
+  trustedProxyHops: int("TRUSTED_PROXY_HOPS", 0),
   demoPassword: text("DEMO_PASSWORD", "foldwright-demo"),
   /** Seed an empty office with a few hundred generated, filed demo documents. */
   seedDemoDocuments: bool("SEED_DEMO_DOCUMENTS", true),

@@ -21,3 +21,13 @@ export const notFound = (what = "That item") =>
   new AppError(404, "not_found", `${what} was not found. It may have been removed, or you may not have access to it.`);
 
 export const badInput = (message: string) => new AppError(422, "bad_input", message);
+
+/** 429: a rate limit was reached (lib/data/rate-limit.ts); answered with Retry-After. */
+export class RateLimited extends AppError {
+  constructor(
+    public readonly retryAfterSeconds: number,
+    message: string,
+  ) {
+    super(429, "rate_limited", message);
+  }
+}

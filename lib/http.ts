@@ -1,7 +1,7 @@
 // Shared pieces of the route handlers: the JSON error shape and the status mapping.
 import { NextResponse } from "next/server";
 import { ZodError } from "zod";
-import { AppError } from "@/lib/errors";
+import { AppError, RateLimited } from "@/lib/errors";
 import { csrfRefusal } from "@/lib/csrf";
 import { isDatabaseUnavailable } from "@/db/errors";
 import { UNAVAILABLE_CODE, UNAVAILABLE_SENTENCE, unavailableService } from "@/lib/unavailable";
@@ -14,6 +14,7 @@ export function errorResponse(status: number, code: string, message: string, hea
 }
 
 export function toErrorResponse(e: unknown) {
+  if (e instanceof RateLimited) return errorResponse(e.status, e.code, e.message, { "Retry-After": String(e.retryAfterSeconds) });
   if (e instanceof AppError) return errorResponse(e.status, e.code, e.message);
   if (e instanceof ZodError) {
     const first = e.issues[0];

@@ -7,6 +7,13 @@ export const TEST_ENV: Record<string, string> = {
   SESSION_SECRET: "test-only-session-secret-0123456789abcdef",
   BCRYPT_COST: "4",
   SIGN_IN_MAX_FAILURES: "3",
+  // Rate limits well above what the whole e2e suite sends from 127.0.0.1 in an hour (the role
+  // matrix alone asks for the same reset five times); tests/integration/rate-limit.test.ts
+  // checks each limit at these values.
+  SIGN_IN_ADDRESS_MAX_FAILURES: "40",
+  RESET_REQUESTS_PER_HOUR: "20",
+  LINK_ATTEMPTS_PER_ADDRESS_PER_HOUR: "300",
+  ATTEMPTS_PER_LINK_PER_HOUR: "40",
   UPLOAD_MAX_BYTES: String(2 * 1024 * 1024),
   JOBS_POLL_MS: "250",
   // Scans by e-mail: a small limit so the oversize refusal needs only a few megabytes.

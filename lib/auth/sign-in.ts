@@ -3,8 +3,8 @@ import "server-only";
 import { getSession, isSessionLive } from "@/lib/auth/session";
 import { checkCredentials, endUserSessions, type SignInResult } from "@/lib/data/users";
 
-export async function signIn(email: string, password: string): Promise<SignInResult> {
-  const result = await checkCredentials(email, password);
+export async function signIn(email: string, password: string, address: string): Promise<SignInResult> {
+  const result = await checkCredentials(email, password, address);
   if (result.ok) {
     const session = await getSession();
     const now = Date.now();

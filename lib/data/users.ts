@@ -4,6 +4,7 @@ import { getDb } from "@/db";
 import { env } from "@/lib/env";
 import type { Role } from "@/lib/auth/permissions";
 import { burnPasswordCheck, verifyPassword } from "@/lib/auth/password";
+import { enforceRateLimit, RATE_RULES, refundHit } from "@/lib/data/rate-limit";
 
 export interface CurrentUser {
   id: number;
@@ -34,27 +35,47 @@ function lockedMessage(until: Date): string {
   return `This account is locked after ${env.signIn.maxFailures} wrong passwords. Try again after ${time} UTC, or ask an admin to unlock it.`;
 }
 
-export async function checkCredentials(emailInput: string, password: string): Promise<SignInResult> {
+/**
+ * Checks an e-mail and password, counting failures per account (the lockout) and per client
+ * address (lib/data/rate-limit.ts). A guess is reserved before the hash is checked: the UPDATE
+ * succeeds only while fewer than SIGN_IN_MAX_FAILURES are counted and the account is not
+ * locked, and its affected-row count decides whether the hash is checked at all — so a burst of
+ * parallel wrong passwords checks at most that many guesses. A right password gives its
+ * reservation back.
+ */
+export async function checkCredentials(emailInput: string, password: string, address: string): Promise<SignInResult> {
+  const rule = RATE_RULES.signInAddress();
+  await enforceRateLimit(rule, address);
+  const result = await checkAccount(emailInput, password);
+  if (result.ok) await refundHit(rule, address);
+  return result;
+}
+
+async function checkAccount(emailInput: string, password: string): Promise<SignInResult> {
   const db = getDb();
   const email = emailInput.trim().toLowerCase();
+  const max = env.signIn.maxFailures;
   const row = await db("users").where({ email }).first();
   if (!row || !row.active || !row.password_hash) {
     await burnPasswordCheck(password);
     return { ok: false, code: "wrong_credentials", message: WRONG };
   }
   const now = new Date();
-  if (row.locked_until && new Date(row.locked_until) > now) {
-    const until = new Date(row.locked_until);
+  const reserved = await db("users")
+    .where({ id: row.id })
+    .where("failed_sign_ins", "<", max)
+    .where((q) => q.whereNull("locked_until").orWhere("locked_until", "<=", now))
+    .increment("failed_sign_ins", 1);
+  if (reserved === 0) {
+    const fresh = await db("users").where({ id: row.id }).first("locked_until");
+    // Locked, or the last allowed guesses are being checked right now (the lock follows).
+    const until = fresh?.locked_until && new Date(fresh.locked_until) > now ? new Date(fresh.locked_until) : new Date(now.getTime() + env.signIn.lockMinutes * 60_000);
     return { ok: false, code: "account_locked", message: lockedMessage(until), lockedUntil: until };
   }
   if (!(await verifyPassword(password, row.password_hash))) {
-    await db("users").where({ id: row.id }).increment("failed_sign_ins", 1);
-    const { failed_sign_ins: failures } = await db("users").where({ id: row.id }).first("failed_sign_ins");
-    if (failures >= env.signIn.maxFailures) {
-      const until = new Date(now.getTime() + env.signIn.lockMinutes * 60_000);
-      await db("users").where({ id: row.id }).update({ locked_until: until, failed_sign_ins: 0 });
-      return { ok: false, code: "account_locked", message: lockedMessage(until), lockedUntil: until };
-    }
+    const until = new Date(Date.now() + env.signIn.lockMinutes * 60_000);
+    const locked = await db("users").where({ id: row.id }).where("failed_sign_ins", ">=", max).update({ locked_until: until, failed_sign_ins: 0 });
+    if (locked) return { ok: false, code: "account_locked", message: lockedMessage(until), lockedUntil: until };
     return { ok: false, code: "wrong_credentials", message: WRONG };
   }
   await db("users").where({ id: row.id }).update({ failed_sign_ins: 0, locked_until: null, last_sign_in_at: now });

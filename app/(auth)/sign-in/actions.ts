@@ -1,5 +1,8 @@
 "use server";
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
+import { RateLimited } from "@/lib/errors";
+import { clientAddressOf } from "@/lib/net/client-address";
 import { signIn, signOut } from "@/lib/auth/sign-in";
 import { signInSchema } from "@/lib/validations/auth";
 
@@ -22,7 +25,13 @@ export async function signInAction(_prev: SignInState, form: FormData): Promise<
     const errors = parsed.error.flatten().fieldErrors;
     return { email, fieldErrors: { email: errors.email?.[0], password: errors.password?.[0] } };
   }
-  const result = await signIn(parsed.data.email, parsed.data.password);
+  let result;
+  try {
+    result = await signIn(parsed.data.email, parsed.data.password, clientAddressOf(await headers()));
+  } catch (e) {
+    if (e instanceof RateLimited) return { email, message: e.message, locked: true };
+    throw e;
+  }
   if (!result.ok) return { email, message: result.message, locked: result.code === "account_locked" };
   redirect(safeNext(form.get("next")));
 }

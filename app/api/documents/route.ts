@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
+import { enforceRateLimit, RATE_RULES } from "@/lib/data/rate-limit";
 import { handle } from "@/lib/http";
 import { requireUser } from "@/lib/data/current-user";
 import { listDocuments } from "@/lib/data/documents";
@@ -34,6 +35,7 @@ export const GET = handle(async (request: Request) => {
 /** One answer per file; the response status is the file's when all files share one. */
 export const POST = handle(async (request: Request) => {
   const user = await requireUser("documents.upload", "upload documents");
+  await enforceRateLimit(RATE_RULES.uploads(), String(user.id));
   if (!(request.headers.get("content-type") ?? "").startsWith("multipart/form-data")) {
     throw new AppError(415, "not_multipart", "Send the files as multipart/form-data, one or more fields named \"file\".");
   }
