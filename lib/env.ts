@@ -175,7 +175,8 @@ export const env = {
     enabled: bool("JOBS_ENABLED", true),
     concurrency: int("JOBS_CONCURRENCY", 1),
     pollMs: int("JOBS_POLL_MS", 1000),
-    leaseSeconds: int("JOBS_LEASE_SECONDS", 300),
+    /** A claimed job's lease; the worker renews it every third of that (a heartbeat), so a dead worker's job is taken over within one lease. */
+    leaseSeconds: int("JOBS_LEASE_SECONDS", 30),
     maxAttempts: int("JOBS_MAX_ATTEMPTS", 5),
     retryBaseSeconds: int("JOBS_RETRY_BASE_SECONDS", 5),
     /** The longest wait between two attempts of a job (a mail server down for hours is retried every 15 minutes). */

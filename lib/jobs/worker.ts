@@ -5,6 +5,9 @@ import crypto from "node:crypto";
 import os from "node:os";
 import { claimJobs, extendLease, failJob, sweepExhaustedJobs, type Job } from "@/lib/data/jobs";
 
+// Three heartbeats per lease: two can be lost (a slow query, a busy event loop) before the lease runs out.
+const HEARTBEATS_PER_LEASE = 3;
+
 export interface JobHandler {
   /** Does the work; must finish by calling completeJob inside its results transaction. */
   run(job: Job, workerId: string): Promise<void>;
@@ -38,7 +41,7 @@ export function startWorkers(options: WorkerOptions): Workers {
     const handler = options.handlers[job.kind];
     const heartbeat = setInterval(
       () => void extendLease(job.id, workerId, options.leaseSeconds).catch(() => {}),
-      Math.max(1000, (options.leaseSeconds * 1000) / 3),
+      Math.max(1000, (options.leaseSeconds * 1000) / HEARTBEATS_PER_LEASE),
     );
     try {
       await handler.run(job, workerId);
