@@ -1,16 +1,20 @@
 "use client";
 import { useState } from "react";
 import { cn } from "@/lib/utils";
+import { MarkedWords, markStems } from "@/components/ui/marked-words";
 
 interface TextPanelProps {
   text: string | null;
   truncated: boolean;
   charCount: number | null;
   reading: boolean;
+  /** The suggestion's "why" terms, marked in the text. */
+  terms?: string[];
 }
 
 /** The text Foldwright read, with sensitive numbers masked; mono by default, sans on request. */
-export function TextPanel({ text, truncated, charCount, reading }: TextPanelProps) {
+export function TextPanel({ text, truncated, charCount, reading, terms = [] }: TextPanelProps) {
+  const stems = markStems(terms);
   const [mono, setMono] = useState(true);
   return (
     <section aria-labelledby="text-heading">
@@ -31,9 +35,10 @@ export function TextPanel({ text, truncated, charCount, reading }: TextPanelProp
             data-testid="document-text"
             className={cn("max-h-[32rem] overflow-auto whitespace-pre-wrap break-words rounded border border-paper-edge bg-white/80 p-3 text-xs leading-relaxed", mono ? "font-mono" : "font-sans text-sm")}
           >
-            {text}
+            <MarkedWords text={text} stems={stems} />
           </pre>
           <p className="mt-1 text-xs text-ink-faint">
+            {stems.length > 0 && "Marked: the words that weighed most in the suggestion. "}
             Social security, bank routing and card numbers are masked here; the original is unchanged.
             {truncated && " Only the beginning of a long text is shown; download the original for the rest."}
           </p>

@@ -7,6 +7,8 @@ import { demoUser } from "../helpers/users";
 import { insertUnfiledDocument, typeIds } from "../helpers/filed-documents";
 import { fileDocument } from "@/lib/data/filing";
 import { saveSuggestion } from "@/lib/data/suggestions";
+import { putObject } from "@/storage/s3";
+import { makeTextPdf } from "../helpers/make-files";
 
 // Undo in To review puts the document back in the queue and writes a reversing event; Move on
 // the document page asks for a reason, offers only matters the person may see, and can be undone.
@@ -120,6 +122,28 @@ describe("undo and move in a browser", () => {
     await page.reload();
     await page.getByTestId("move-button").waitFor();
     await page.screenshot({ path: `${SHOTS}-document-390.png`, fullPage: true });
+    await context.close();
+  });
+
+  it("the document page shows the original's page beside the text read, and pages through with the keyboard", async () => {
+    const bytes = await makeTextPdf([["Lease agreement, page one"], ["Schedule of rent, page two"]]);
+    const key = `test/preview/${Date.now()}`;
+    await putObject(key, Buffer.from(bytes), { contentType: "application/pdf" });
+    const id = await insertUnfiledDocument(owner, "Contracts & leases");
+    await owner("documents").where({ id }).update({ storage_key: key, media_type: "application/pdf", size_bytes: bytes.byteLength, page_count: 2 });
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await context.newPage();
+    await signIn(page, "clerk@example.com");
+    await page.goto(`${BASE_URL}/documents/${id}`);
+    const preview = page.getByTestId("page-preview");
+    await preview.getByTestId("preview-image").waitFor({ timeout: 30_000 });
+    await expect.poll(() => preview.getByTestId("preview-page").textContent()).toBe("Page 1 of 2");
+    await preview.getByTestId("preview-frame").focus();
+    await page.keyboard.press("ArrowRight");
+    await expect.poll(() => preview.getByTestId("preview-image").getAttribute("alt")).toContain("Page 2 of");
+    await page.screenshot({ path: `${SHOTS}-document-preview.png` });
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.screenshot({ path: `${SHOTS}-document-preview-390.png`, fullPage: true });
     await context.close();
   });
 });

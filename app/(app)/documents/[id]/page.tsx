@@ -7,6 +7,7 @@ import { listCabinetTypes, listVisibleMatters } from "@/lib/data/catalog";
 import { documentState, lastPlacement } from "@/components/document/document-state";
 import { SuggestionPanel } from "@/components/document/suggestion-panel";
 import { TextPanel } from "@/components/document/text-panel";
+import { PagePreview } from "@/components/document/page-preview";
 import { Timeline } from "@/components/document/timeline";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/data/current-user";
@@ -68,10 +69,15 @@ export default async function DocumentPage({ params }: DocumentPageProps) {
         move={movable ? <MoveButton doc={{ id: document.id, name: document.name, cabinetTypeId: document.cabinetTypeId, matterId: document.matterId }} className="ml-2 rounded border border-paper-edge bg-white/70 px-2 py-0.5 text-xs font-medium text-verdigris hover:bg-paper-deep" /> : null}
       />
       <DocumentRecords document={document} holds={holds} canPlaceHold={can(user.role, "holds.place")} disposal={disposal} />
+      {/* A tombstone's text was cleared with its original; the notice above says so. */}
+      {!document.disposedAt && (
+        <div className="grid gap-6 lg:grid-cols-2">
+          <PagePreview documentId={document.id} name={document.name} pageCount={document.pageCount} />
+          <TextPanel text={document.text} truncated={document.textTruncated} charCount={document.charCount} reading={document.status === "reading"} terms={suggestion?.why.map((w) => w.term) ?? []} />
+        </div>
+      )}
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-6">
-          {/* A tombstone's text was cleared with its original; the notice above says so. */}
-          {!document.disposedAt && <TextPanel text={document.text} truncated={document.textTruncated} charCount={document.charCount} reading={document.status === "reading"} />}
           <Timeline events={timeline} />
         </div>
         <aside className="lg:sticky lg:top-6 lg:self-start">
