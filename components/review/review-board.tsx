@@ -8,9 +8,48 @@ import { decisionOf, manyAcceptedDecision, type FilingAnswer } from "@/component
 import { ApiError, getJson, postJson, type FilingPayload } from "./api";
 import { DecisionPanel } from "./decision-panel";
 import { QueueTable } from "./queue-table";
+import { pageWords, QUERY_COOKIE, QUEUE_PAGE_SIZE, queueApiUrl, queueSearchParams, type QueueQuery } from "./queue-query";
 import type { MatterOption, Option, QueueItem, QueuePage } from "./types";
 
-type Sort = "age" | "confidence" | "cabinet" | "matter";
+const chip = (on: boolean) => `rounded border px-2 py-0.5 ${on ? "border-verdigris bg-verdigris text-white" : "border-paper-edge bg-white/70 text-ink hover:bg-paper-deep"}`;
+
+/** The page without these items: total and per-type counts lowered with them, so counts stay true at once. */
+function withoutItems(current: QueuePage | undefined, gone: QueueItem[]): QueuePage {
+  const base = current ?? { items: [], total: 0, page: 1, pageSize: QUEUE_PAGE_SIZE, byType: [] };
+  const ids = new Set(gone.map((g) => g.id));
+  const removed = base.items.filter((i) => ids.has(i.id));
+  const perType = new Map<number | null, number>();
+  for (const r of removed) perType.set(r.suggestion?.cabinetTypeId ?? null, (perType.get(r.suggestion?.cabinetTypeId ?? null) ?? 0) + 1);
+  return {
+    ...base,
+    items: base.items.filter((i) => !ids.has(i.id)),
+    total: Math.max(0, base.total - removed.length),
+    byType: base.byType.map((t) => ({ ...t, count: Math.max(0, t.count - (perType.get(t.cabinetTypeId) ?? 0)) })).filter((t) => t.count > 0),
+  };
+}
+
+/** "1–100 of 336 waiting", with the previous and next pages. */
+function Pager({ query, data, pages, onPage }: { query: QueueQuery; data: QueuePage | undefined; pages: number; onPage: (page: number) => void }) {
+  if (!data) return null;
+  const noun = query.list === "review" ? "waiting" : "to spot-check";
+  return (
+    <nav aria-label="Pages of the queue" className="flex flex-wrap items-center gap-2 text-xs text-ink-soft">
+      <span data-testid="queue-total">{pageWords(data.page, data.pageSize, data.items.length, data.total)} {noun}</span>
+      {pages > 1 && (
+        <>
+          <span aria-hidden>—</span>
+          <button type="button" disabled={query.page <= 1} onClick={() => onPage(query.page - 1)} className="text-verdigris-dark underline-offset-2 hover:underline disabled:text-ink-soft disabled:no-underline">
+            previous
+          </button>
+          <span>page {query.page} of {pages}</span>
+          <button type="button" disabled={query.page >= pages} onClick={() => onPage(query.page + 1)} className="text-verdigris-dark underline-offset-2 hover:underline disabled:text-ink-soft disabled:no-underline" data-testid="next-page">
+            next
+          </button>
+        </>
+      )}
+    </nav>
+  );
+}
 
 const SHORTCUTS: [string, string][] = [
   ["J / ↓", "next document"],
@@ -23,13 +62,10 @@ const SHORTCUTS: [string, string][] = [
   ["X", "select for accepting together"],
 ];
 
-export function ReviewBoard({ types, matters }: { types: Option[]; matters: MatterOption[] }) {
-  const [list, setList] = useState<"review" | "spot-check">("review");
-  const [sort, setSort] = useState<Sort>("age");
-  const [dir, setDir] = useState<"asc" | "desc">("asc");
-  const [cabinetType, setCabinetType] = useState("");
-  const [matter, setMatter] = useState("");
-  const [confidence, setConfidence] = useState(""); // "", "below:0.5", "above:0.9" …
+export function ReviewBoard({ types, matters, initialQuery }: { types: Option[]; matters: MatterOption[]; initialQuery: QueueQuery }) {
+  const [query, setQuery] = useState<QueueQuery>(initialQuery);
+  const { list, sort, dir } = query;
+  const [searchText, setSearchText] = useState(initialQuery.q);
   const [selectedId, setSelectedId] = useState<number | null>(null);
   const [checked, setChecked] = useState<Set<number>>(new Set());
   const [bar, setBar] = useState(0.9);
@@ -37,10 +73,31 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
   const [decision, setDecision] = useState<Decision | null>(null);
   const pickerRef = useRef<HTMLInputElement>(null);
 
-  const key = `/api/review?list=${list}&sort=${sort}&dir=${dir}&pageSize=200${cabinetType ? `&cabinetType=${cabinetType}` : ""}${matter ? `&matter=${matter}` : ""}${confidence ? `&${confidence.startsWith("below") ? "maxConfidence" : "minConfidence"}=${confidence.split(":")[1]}` : ""}`;
-  const { data, error, mutate, isLoading } = useSWR<QueuePage>(key, getJson, { refreshInterval: 5000 });
+  /** A change of sort, filter or search starts again at page 1; a page change keeps the rest. */
+  const update = useCallback((patch: Partial<QueueQuery>) => {
+    setQuery((q) => ({ ...q, page: 1, ...patch }));
+    setSelectedId(null);
+  }, []);
+
+  // The address and the browser's memory follow every change, so a reload keeps it.
+  useEffect(() => {
+    const params = queueSearchParams(query).toString();
+    window.history.replaceState(window.history.state, "", params ? `/review?${params}` : "/review");
+    // Remembered in a cookie the page reads, so coming back from the rail (a bare /review) keeps it.
+    document.cookie = `${QUERY_COOKIE}=${encodeURIComponent(params)}; path=/review; max-age=${60 * 60 * 24 * 180}; samesite=lax`;
+  }, [query]);
+  // Search as you type, a moment after the last key.
+  useEffect(() => {
+    if (searchText.trim() === query.q.trim()) return;
+    const t = setTimeout(() => update({ q: searchText }), 300);
+    return () => clearTimeout(t);
+  }, [searchText, query.q, update]);
+
+  const key = queueApiUrl(query);
+  const { data, error, mutate, isLoading } = useSWR<QueuePage>(key, getJson, { refreshInterval: 5000, keepPreviousData: true });
   const items = useMemo(() => data?.items ?? [], [data]);
   const selected = items.find((i) => i.id === selectedId) ?? items[0] ?? null;
+  const pages = data ? Math.max(1, Math.ceil(data.total / QUEUE_PAGE_SIZE)) : 1;
 
   const move = useCallback(
     (step: number) => {
@@ -57,6 +114,7 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
       const at = items.findIndex((i) => i.id === item.id);
       const next = items[at + 1] ?? items[at - 1] ?? null;
       setSelectedId(next?.id ?? null);
+      setChecked((c) => (c.has(item.id) ? new Set([...c].filter((x) => x !== item.id)) : c));
       try {
         const box: { answer?: FilingAnswer } = {};
         await mutate(
@@ -65,7 +123,7 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
             return current;
           },
           {
-            optimisticData: (current?: QueuePage) => ({ ...(current ?? { page: 1, pageSize: 200 }), items: (current?.items ?? []).filter((i) => i.id !== item.id), total: Math.max(0, (current?.total ?? 1) - 1) }),
+            optimisticData: (current?: QueuePage) => withoutItems(current, [item]),
             rollbackOnError: true,
             populateCache: false,
             revalidate: true,
@@ -128,28 +186,40 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
         <div className="flex flex-wrap items-end gap-3 text-xs">
           <div role="tablist" className="flex overflow-hidden rounded border border-paper-edge">
             {(["review", "spot-check"] as const).map((l) => (
-              <button key={l} role="tab" aria-selected={list === l} onClick={() => { setList(l); setChecked(new Set()); setSelectedId(null); }} className={`px-3 py-1 ${list === l ? "bg-verdigris text-white" : "bg-white/60"}`}>
+              <button key={l} role="tab" aria-selected={list === l} onClick={() => { update({ list: l }); setChecked(new Set()); }} className={`px-3 py-1 ${list === l ? "bg-verdigris text-white" : "bg-white/60"}`}>
                 {l === "review" ? "To review" : "Auto-filed spot-check"}
               </button>
             ))}
           </div>
+          <label className="flex min-w-0 flex-1 basis-48 flex-col gap-0.5">
+            Search name and words
+            <input
+              type="search"
+              value={searchText}
+              onChange={(e) => setSearchText(e.target.value)}
+              onKeyDown={(e) => { if (e.key === "Enter") update({ q: searchText }); }}
+              placeholder="e.g. invoice 0117"
+              data-testid="queue-search"
+              className="rounded border border-paper-edge bg-white px-2 py-1 text-sm"
+            />
+          </label>
           <label>
             Cabinet type{" "}
-            <select value={cabinetType} onChange={(e) => setCabinetType(e.target.value)} className="rounded border border-paper-edge bg-white px-1 py-0.5">
+            <select value={query.cabinetType ?? ""} onChange={(e) => update({ cabinetType: e.target.value ? Number(e.target.value) : null })} className="rounded border border-paper-edge bg-white px-1 py-0.5" data-testid="queue-type-filter">
               <option value="">all</option>
               {types.map((t) => <option key={t.id} value={t.id}>{t.name}</option>)}
             </select>
           </label>
           <label>
             Matter{" "}
-            <select value={matter} onChange={(e) => setMatter(e.target.value)} className="rounded border border-paper-edge bg-white px-1 py-0.5">
+            <select value={query.matter ?? ""} onChange={(e) => update({ matter: e.target.value ? Number(e.target.value) : null })} className="rounded border border-paper-edge bg-white px-1 py-0.5">
               <option value="">all</option>
               {matters.map((m) => <option key={m.id} value={m.id}>{m.number}</option>)}
             </select>
           </label>
           <label>
             Confidence{" "}
-            <select value={confidence} onChange={(e) => setConfidence(e.target.value)} className="rounded border border-paper-edge bg-white px-1 py-0.5">
+            <select value={query.confidence} onChange={(e) => update({ confidence: e.target.value })} className="rounded border border-paper-edge bg-white px-1 py-0.5">
               <option value="">any</option>
               <option value="above:0.9">90% and above</option>
               <option value="above:0.7">70% and above</option>
@@ -157,8 +227,37 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
               <option value="below:0.5">below 50%</option>
             </select>
           </label>
-          <span className="ml-auto text-ink-soft">{data ? `${data.total} waiting` : ""}</span>
+          <Button
+            variant="quiet"
+            aria-pressed={sort === "age" && dir === "desc"}
+            onClick={() => update(sort === "age" && dir === "desc" ? { sort: "age", dir: "asc" } : { sort: "age", dir: "desc" })}
+            data-testid="newest-first"
+            className="py-1 text-xs"
+          >
+            {sort === "age" && dir === "desc" ? "Longest waiting first" : "Newest uploads first"}
+          </Button>
         </div>
+
+        {data && data.byType.length > 0 && (
+          <div aria-label="Waiting per cabinet type" role="group" className="flex flex-wrap gap-1 text-xs" data-testid="type-counts">
+            <button type="button" aria-pressed={!query.cabinetType} onClick={() => update({ cabinetType: null })} className={chip(!query.cabinetType)}>
+              All <span className="font-semibold">{data.byType.reduce((n, t) => n + t.count, 0)}</span>
+            </button>
+            {data.byType.map((t) =>
+              t.cabinetTypeId ? (
+                <button key={t.cabinetTypeId} type="button" aria-pressed={query.cabinetType === t.cabinetTypeId} onClick={() => update({ cabinetType: query.cabinetType === t.cabinetTypeId ? null : t.cabinetTypeId })} className={chip(query.cabinetType === t.cabinetTypeId)} data-testid="type-count" data-type-id={t.cabinetTypeId}>
+                  {t.cabinetType} <span className="font-semibold">{t.count}</span>
+                </button>
+              ) : (
+                <span key="none" className="rounded border border-dashed border-paper-edge px-2 py-0.5 text-ink-soft">
+                  File by hand <span className="font-semibold">{t.count}</span>
+                </span>
+              ),
+            )}
+          </div>
+        )}
+
+        <Pager query={query} data={data} pages={pages} onPage={(page) => { setQuery((q) => ({ ...q, page })); setSelectedId(null); }} />
 
         {list === "review" && items.length > 0 && (
           <div className="flex flex-wrap items-center gap-2 rounded border border-paper-edge bg-white/60 px-3 py-2 text-xs">
@@ -178,7 +277,11 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
         {isLoading && <p className="text-sm text-ink-soft">Loading the queue…</p>}
         {data && items.length === 0 && (
           <p className="rounded border border-dashed border-paper-edge px-4 py-6 text-sm text-ink-soft">
-            {list === "review" ? "Nothing waits for review. New documents appear here once they have been read; drop files at Intake." : "No auto-filed document waits for a spot-check."}
+            {query.q.trim() || query.cabinetType || query.matter || query.confidence
+              ? "Nothing waiting matches this search or these filters. Clear them to see the whole queue."
+              : list === "review"
+                ? "Nothing waits for review. New documents appear here once they have been read; drop files at Intake."
+                : "No auto-filed document waits for a spot-check."}
           </p>
         )}
         {items.length > 0 && (
@@ -189,12 +292,13 @@ export function ReviewBoard({ types, matters }: { types: Option[]; matters: Matt
               checked={checked}
               sort={sort}
               dir={dir}
-              onSort={(s) => { if (s === sort) setDir(dir === "asc" ? "desc" : "asc"); else { setSort(s); setDir(s === "confidence" ? "desc" : "asc"); } }}
+              onSort={(s) => update(s === sort ? { dir: dir === "asc" ? "desc" : "asc" } : { sort: s, dir: s === "confidence" ? "desc" : "asc" })}
               onSelect={setSelectedId}
               onCheck={(id) => setChecked((c) => new Set(c.has(id) ? [...c].filter((x) => x !== id) : [...c, id]))}
             />
           </div>
         )}
+        {items.length > 0 && pages > 1 && <Pager query={query} data={data} pages={pages} onPage={(page) => { setQuery((q) => ({ ...q, page })); setSelectedId(null); }} />}
         <details className="text-xs text-ink-soft" open>
           <summary className="cursor-pointer">Keyboard shortcuts</summary>
           <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5">

@@ -183,11 +183,11 @@ export interface DocumentFilters {
   pageSize: number;
 }
 
-/** Boolean-mode FULLTEXT needs its operators removed from what a person typed. */
-function toFulltextQuery(q: string): string {
+/** Words a person typed, as a MariaDB boolean full-text query: every word required, as a prefix. */
+export function toFulltextQuery(q: string): string {
+  // Only letters and digits reach the index: an operator (+ - < > ( ) ~ * " @ %) alone is a syntax error.
   return q
-    .replace(/[+\-<>()~*"@]/g, " ")
-    .split(/\s+/)
+    .split(/[^\p{L}\p{N}]+/u)
     .filter(Boolean)
     .map((w) => `+${w}*`)
     .join(" ");

@@ -3,6 +3,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db";
 import { findWalledMatters, whereDocumentVisible, type WalledMatters } from "@/lib/data/document-access";
+import { toFulltextQuery } from "@/lib/data/documents";
 import { heldSql } from "@/lib/data/retention-sql";
 import type { CurrentUser } from "@/lib/data/users";
 
@@ -14,6 +15,8 @@ export interface QueueFilters {
   matterId?: number;
   minConfidence?: number;
   maxConfidence?: number;
+  /** Words of the file name or the text read (every word must match, as a prefix). */
+  q?: string;
   page: number;
   pageSize: number;
 }
@@ -60,7 +63,35 @@ function baseQuery(db: Knex, user: CurrentUser, f: QueueFilters, walled: WalledM
   if (f.matterId) q.where("s.top_matter_id", f.matterId);
   if (f.minConfidence !== undefined) q.where("s.top_confidence", ">=", f.minConfidence);
   if (f.maxConfidence !== undefined) q.where("s.top_confidence", "<=", f.maxConfidence);
+  const words = f.q?.trim() ?? "";
+  if (words) {
+    // The full-text index finds words of the name and the text; a file name is also matched as
+    // typed (the index splits "invoice-0117.pdf" into words and drops short ones).
+    const search = toFulltextQuery(words);
+    const like = `%${words.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    q.where((w) => {
+      if (search) w.whereRaw("MATCH(d.original_name, d.text) AGAINST (? IN BOOLEAN MODE)", [search]);
+      w.orWhere("d.original_name", "like", like);
+    });
+  }
   return q;
+}
+
+export interface TypeCount {
+  /** null: documents with no suggested cabinet type (unreadable, to file by hand). */
+  cabinetTypeId: number | null;
+  cabinetType: string | null;
+  count: number;
+}
+
+/** How many of the queue (its other filters kept, the cabinet type filter left out) wait per suggested cabinet type. */
+export async function countQueueByType(user: CurrentUser, f: QueueFilters): Promise<TypeCount[]> {
+  const db = getDb();
+  const rows = await baseQuery(db, user, { ...f, cabinetTypeId: undefined }, await findWalledMatters(user))
+    .groupBy("s.top_cabinet_type_id", "ct.name")
+    .select("s.top_cabinet_type_id as id", "ct.name as name", db.raw("COUNT(*) AS n"))
+    .orderByRaw("ct.name IS NULL, ct.name");
+  return rows.map((r: { id: number | null; name: string | null; n: number | string }) => ({ cabinetTypeId: r.id, cabinetType: r.name, count: Number(r.n) }));
 }
 
 export async function listQueue(user: CurrentUser, f: QueueFilters): Promise<{ items: QueueItem[]; total: number }> {

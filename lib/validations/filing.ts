@@ -27,6 +27,7 @@ export const queueSchema = z.object({
   matter: z.coerce.number().int().positive().optional(),
   minConfidence: z.coerce.number().min(0).max(1).optional(),
   maxConfidence: z.coerce.number().min(0).max(1).optional(),
+  q: z.string().trim().max(200, "Search for at most 200 characters.").optional(),
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });

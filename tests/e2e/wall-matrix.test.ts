@@ -66,6 +66,7 @@ const SURFACES: Surface[] = [
   { name: "page preview", file: "api/documents/[id]/preview/route.ts", path: (d) => `/api/documents/${d.id}/preview?page=1`, roles: ALL_READERS, shows: KINDS, own: true },
   { name: "document page", file: "(app)/documents/[id]/page.tsx", path: (d) => `/documents/${d.id}`, roles: ALL_READERS, shows: KINDS, own: true },
   { name: "To review queue", file: "api/review/route.ts", path: () => "/api/review?list=review&pageSize=200", roles: DECIDERS, shows: ["suggested", "candidate"], carries: listCarries },
+  { name: "To review search", file: "api/review/route.ts", path: (d) => `/api/review?list=review&q=${d.word}`, roles: DECIDERS, shows: ["suggested", "candidate"], carries: listCarries },
   { name: "spot-check list", file: "api/review/route.ts", path: () => "/api/review?list=spot-check&pageSize=200", roles: DECIDERS, shows: [], carries: listCarries },
   { name: "filing record", file: "api/filing-events/route.ts", path: () => "/api/filing-events?pageSize=200", roles: AUDIT, shows: KINDS, carries: eventsCarry },
   { name: "record of one document", file: "api/filing-events/route.ts", path: (d) => `/api/filing-events?document=${d.id}`, roles: AUDIT, shows: KINDS, carries: eventsCarry },

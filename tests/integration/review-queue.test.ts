@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb } from "@/db";
-import { listQueue, type QueueFilters } from "@/lib/data/review";
+import { countQueueByType, listQueue, type QueueFilters } from "@/lib/data/review";
 import { saveSuggestion } from "@/lib/data/suggestions";
 import type { CurrentUser } from "@/lib/data/users";
 import { ownerDb } from "../helpers/db";
@@ -41,7 +41,8 @@ beforeAll(async () => {
   ids.high = await insertUnfiledDocument(owner, "Invoices & receipts");
   ids.mid = await insertUnfiledDocument(owner, "Payroll records");
   ids.low = await insertUnfiledDocument(owner, "Contracts & leases");
-  ids.walled = await insertUnfiledDocument(owner, "Contracts & leases");
+  ids.walled = await insertUnfiledDocument(owner, "Contracts & leases", "Ravelston quarterly");
+  await owner("documents").where({ id: ids.mid }).update({ original_name: "scan-0117_payroll.pdf" });
   await suggest(ids.high, types.get("Invoices & receipts")!, 0.93, open);
   await suggest(ids.mid, types.get("Payroll records")!, 0.71, open);
   await suggest(ids.low, types.get("Contracts & leases")!, 0.32, open);
@@ -70,5 +71,43 @@ describe("the To review queue", () => {
     const { items, total } = await listQueue(clerk, base);
     expect(items.map((i) => i.id)).toEqual([ids.high, ids.mid, ids.low]);
     expect(total).toBe(3);
+  });
+
+  it("pages the queue: the total stays the whole queue's, each page holds its own rows", async () => {
+    const first = await listQueue(partner, { ...base, pageSize: 3, page: 1 });
+    const second = await listQueue(partner, { ...base, pageSize: 3, page: 2 });
+    expect(first.items.map((i) => i.id)).toEqual([ids.high, ids.walled, ids.mid]);
+    expect(second.items.map((i) => i.id)).toEqual([ids.low]);
+    expect([first.total, second.total]).toEqual([4, 4]);
+  });
+
+  it("sorts by upload time both ways (the newest first in one step)", async () => {
+    await owner("documents").where({ id: ids.low }).update({ uploaded_at: new Date(Date.now() + 60_000) });
+    const newest = await listQueue(partner, { ...base, sort: "age", dir: "desc" });
+    expect(newest.items[0].id).toBe(ids.low);
+    const oldest = await listQueue(partner, { ...base, sort: "age", dir: "asc" });
+    expect(oldest.items.at(-1)?.id).toBe(ids.low);
+  });
+
+  it("searches the file name as typed and the words read, and never past the wall", async () => {
+    // The name as typed, punctuation and all.
+    expect((await listQueue(partner, { ...base, q: "scan-0117" })).items.map((i) => i.id)).toEqual([ids.mid]);
+    // The words read: every word must match (as a prefix).
+    expect((await listQueue(partner, { ...base, q: "ravelston quarter" })).items.map((i) => i.id)).toEqual([ids.walled]);
+    expect((await listQueue(clerk, { ...base, q: "ravelston quarter" })).total).toBe(0);
+    expect((await listQueue(partner, { ...base, q: "ravelston payroll-nowhere" })).total).toBe(0);
+    // LIKE's own characters are taken literally.
+    expect((await listQueue(partner, { ...base, q: "%" })).total).toBe(0);
+    expect((await listQueue(partner, { ...base, q: "_payroll" })).items.map((i) => i.id)).toEqual([ids.mid]);
+  });
+
+  it("counts the queue per suggested cabinet type, under the other filters, behind the wall", async () => {
+    const types = await typeIds(owner);
+    const byName = (rows: { cabinetType: string | null; count: number }[]) => Object.fromEntries(rows.map((r) => [r.cabinetType, r.count]));
+    const contracts = types.get("Contracts & leases")!;
+    // The cabinet type filter is left out of the counts (they are what the filter offers).
+    expect(byName(await countQueueByType(partner, { ...base, cabinetTypeId: contracts }))).toEqual({ "Contracts & leases": 2, "Invoices & receipts": 1, "Payroll records": 1 });
+    expect(byName(await countQueueByType(clerk, base))).toEqual({ "Contracts & leases": 1, "Invoices & receipts": 1, "Payroll records": 1 });
+    expect(byName(await countQueueByType(partner, { ...base, minConfidence: 0.7 }))).toEqual({ "Contracts & leases": 1, "Invoices & receipts": 1, "Payroll records": 1 });
   });
 });

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { handle } from "@/lib/http";
 import { requireUser } from "@/lib/data/current-user";
-import { listQueue } from "@/lib/data/review";
+import { countQueueByType, listQueue, type QueueFilters } from "@/lib/data/review";
 import { queueSchema } from "@/lib/validations/filing";
 
 export const dynamic = "force-dynamic";
@@ -9,7 +9,7 @@ export const dynamic = "force-dynamic";
 export const GET = handle(async (request: Request) => {
   const user = await requireUser("filing.decide", "work the To review queue");
   const p = queueSchema.parse(Object.fromEntries(new URL(request.url).searchParams));
-  const { items, total } = await listQueue(user, {
+  const filters: QueueFilters = {
     list: p.list,
     sort: p.sort,
     dir: p.dir,
@@ -17,8 +17,10 @@ export const GET = handle(async (request: Request) => {
     matterId: p.matter,
     minConfidence: p.minConfidence,
     maxConfidence: p.maxConfidence,
+    q: p.q || undefined,
     page: p.page,
     pageSize: p.pageSize,
-  });
-  return NextResponse.json({ items, total, page: p.page, pageSize: p.pageSize });
+  };
+  const [{ items, total }, byType] = await Promise.all([listQueue(user, filters), countQueueByType(user, filters)]);
+  return NextResponse.json({ items, total, page: p.page, pageSize: p.pageSize, byType });
 });
