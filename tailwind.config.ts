@@ -10,7 +10,7 @@ const config: Config = {
         paper: { DEFAULT: "#F6F3EC", deep: "#ECE7DB", edge: "#D9D2C3" },
         ink: { DEFAULT: "#1F2430", soft: "#4A5060", faint: "#7A7F8C" },
         verdigris: { DEFAULT: "#2E6B5E", dark: "#22524A", light: "#D7E6E1" },
-        amber: { DEFAULT: "#A86B12", light: "#F3E3C6" },
+        amber: { DEFAULT: "#A86B12", dark: "#7A4C08", light: "#F3E3C6" },
         brick: { DEFAULT: "#9A3324", light: "#F2D9D4" },
       },
       fontFamily: {

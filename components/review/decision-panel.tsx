@@ -5,6 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Confidence } from "@/components/ui/confidence";
 import { Notice } from "@/components/ui/notice";
 import { CabinetPicker } from "./cabinet-picker";
+import { MatterCombobox } from "./matter-combobox";
 import { TextPreview } from "./text-preview";
 import { getJson, type FilingPayload } from "./api";
 import type { DocumentView, MatterOption, Option, QueueItem } from "./types";
@@ -15,6 +16,10 @@ interface PanelProps {
   types: Option[];
   matters: MatterOption[];
   onDecide: (item: QueueItem, payload: FilingPayload) => void;
+  /** Matter ids this person filed into last, most recent first (offered after the found ones). */
+  recent: number[];
+  /** Hands focus back to the queue (after Escape or a choice). */
+  onQueueFocus: () => void;
 }
 
 const METHOD_WORDS: Record<string, string> = {
@@ -24,7 +29,7 @@ const METHOD_WORDS: Record<string, string> = {
 };
 
 /** The right panel: the document, the suggestion and the decision controls. */
-export const DecisionPanel = forwardRef<HTMLInputElement, PanelProps>(function DecisionPanel({ item, list, types, matters, onDecide }, pickerRef) {
+export const DecisionPanel = forwardRef<HTMLInputElement, PanelProps>(function DecisionPanel({ item, list, types, matters, onDecide, recent, onQueueFocus }, pickerRef) {
   const { data, error } = useSWR<DocumentView>(`/api/documents/${item.id}`, getJson);
   const suggestion = data?.suggestion ?? null;
   // null until the person picks: then the filed or suggested matter is the default.
@@ -33,9 +38,21 @@ export const DecisionPanel = forwardRef<HTMLInputElement, PanelProps>(function D
 
   const chosenMatter = matterId === "" ? undefined : matterId;
   const canAccept = list === "review" && Boolean(item.suggestion?.cabinetTypeId);
-  const decide = (payload: FilingPayload) => onDecide(item, { ...payload, matterId: payload.matterId ?? chosenMatter });
+  // A decision that waits for its matter: A (or a cabinet type) with no matter yet opens the
+  // matter step, and choosing the matter there files it; Escape drops it, filing nothing.
+  const [pending, setPending] = useState<FilingPayload | null>(null);
+  const decide = (payload: FilingPayload) => {
+    const m = payload.matterId ?? chosenMatter;
+    if (!m && list === "review") {
+      setPending(payload);
+      document.getElementById("matter-select")?.focus();
+      return;
+    }
+    onDecide(item, { ...payload, matterId: m });
+  };
   const refile = (cabinetTypeId: number) => decide({ action: list === "spot-check" ? "move" : canAccept ? "refile" : "file", cabinetTypeId });
-  const candidateIds = new Set(suggestion?.matterCandidates.map((c) => c.matterId));
+  const ranking = suggestion?.ranked.map((r) => r.cabinetTypeId) ?? [];
+  const pendingWords = pending ? (pending.action === "accept" ? `accept ${suggestion?.ranked[0]?.name ?? item.suggestion?.cabinetType ?? "the suggestion"}` : `file to ${types.find((t) => t.id === pending.cabinetTypeId)?.name ?? "that cabinet type"}`) : null;
 
   return (
     <div className="space-y-4" data-testid="decision-panel">
@@ -100,41 +117,42 @@ export const DecisionPanel = forwardRef<HTMLInputElement, PanelProps>(function D
         </section>
       )}
 
-      <CabinetPicker ref={pickerRef} types={types} onPick={refile} label={canAccept ? "Refile to any cabinet type" : "File to cabinet type"} />
+      <CabinetPicker ref={pickerRef} types={types} ranking={ranking} onPick={refile} onDone={onQueueFocus} label={canAccept ? "Refile to any cabinet type" : "File to cabinet type"} />
 
-      <label className="block text-xs text-ink-soft">
-        Matter <kbd className="rounded border border-paper-edge px-1 font-mono">M</kbd>
-        {suggestion?.matterAmbiguous && suggestion.matterCandidates.length > 1 && <span className="ml-1 text-amber">— several matters fit; pick one</span>}
-        <select
-          id="matter-select"
-          value={matterId}
-          onChange={(e) => setPicked(e.target.value === "" ? "" : Number(e.target.value))}
-          className="mt-1 w-full rounded border border-paper-edge bg-white px-2 py-1 text-sm text-ink"
-        >
-          <option value="">Choose a matter…</option>
-          {suggestion && suggestion.matterCandidates.length > 0 && (
-            <optgroup label="Found in the document">
-              {suggestion.matterCandidates.map((c) => (
-                <option key={c.matterId} value={c.matterId}>
-                  {c.number} — {c.title} ({c.reasons.join(", ")})
-                </option>
-              ))}
-            </optgroup>
-          )}
-          <optgroup label="All matters">
-            {matters.filter((m) => !candidateIds.has(m.id)).map((m) => (
-              <option key={m.id} value={m.id}>
-                {m.number} — {m.clientName}: {m.title}
-              </option>
-            ))}
-          </optgroup>
-        </select>
-      </label>
+      <MatterCombobox
+        id="matter-select"
+        label="Matter (M)"
+        matters={matters}
+        candidates={suggestion?.matterCandidates ?? []}
+        recent={recent}
+        value={chosenMatter ?? null}
+        onChange={(id) => {
+          setPicked(id);
+          if (pending) {
+            setPending(null);
+            onDecide(item, { ...pending, matterId: id });
+          }
+        }}
+        onDone={() => {
+          setPending(null);
+          onQueueFocus();
+        }}
+        hint={
+          <>
+            {suggestion?.matterAmbiguous && suggestion.matterCandidates.length > 1 && <span className="block text-xs text-amber-dark">Several matters fit; pick one.</span>}
+            {pendingWords && (
+              <span className="block text-xs text-amber-dark" role="status" data-testid="pending-decision">
+                Choose the matter to {pendingWords}: Enter files it, Escape leaves it unfiled.
+              </span>
+            )}
+          </>
+        }
+      />
 
       <div className="flex gap-2">
         {canAccept && (
-          <Button onClick={() => decide({ action: "accept" })} disabled={!chosenMatter} data-testid="accept-button">
-            Accept <kbd className="font-mono text-xs opacity-80">A</kbd>
+          <Button onClick={() => decide({ action: "accept" })} data-testid="accept-button">
+            {chosenMatter ? "Accept" : "Accept — choose the matter"} <kbd className="font-mono text-xs opacity-80">A</kbd>
           </Button>
         )}
         {list === "spot-check" && (
@@ -143,7 +161,6 @@ export const DecisionPanel = forwardRef<HTMLInputElement, PanelProps>(function D
           </Button>
         )}
       </div>
-      {!chosenMatter && list === "review" && <p className="text-xs text-amber">Choose the matter before filing.</p>}
 
       {data?.document.text ? (
         <section aria-label="Text read">

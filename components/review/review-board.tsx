@@ -7,6 +7,7 @@ import { DecisionNotice, type Decision } from "@/components/filing/decision-noti
 import { decisionOf, manyAcceptedDecision, type FilingAnswer } from "@/components/filing/decision-words";
 import { ApiError, getJson, postJson, type FilingPayload } from "./api";
 import { DecisionPanel } from "./decision-panel";
+import { MatterCombobox } from "./matter-combobox";
 import { QueueTable } from "./queue-table";
 import { pageWords, QUERY_COOKIE, QUEUE_PAGE_SIZE, queueApiUrl, queueSearchParams, type QueueQuery } from "./queue-query";
 import type { MatterOption, Option, QueueItem, QueuePage } from "./types";
@@ -54,13 +55,28 @@ function Pager({ query, data, pages, onPage }: { query: QueueQuery; data: QueueP
 const SHORTCUTS: [string, string][] = [
   ["J / ↓", "next document"],
   ["K / ↑", "previous document"],
-  ["A", "accept the suggestion"],
+  ["A", "accept the suggestion (asks for the matter when none is found)"],
   ["2–5", "refile to that runner-up"],
-  ["/", "any cabinet type"],
-  ["M", "choose the matter"],
+  ["/", "any cabinet type: type, ↓/↑, Enter"],
+  ["M", "choose the matter: type a number, client or title, ↓/↑, Enter"],
+  ["Esc", "leave a picker without changing anything; back to the queue"],
   ["C", "confirm (spot-check)"],
   ["X", "select for accepting together"],
+  ["Shift+M", "one matter for all selected"],
+  ["Shift+A", "accept all selected"],
 ];
+
+/** Matters this browser filed into last (most recent first), offered after the ones found in the document. */
+const RECENT_KEY = "foldwright.recentMatters";
+function readRecent(): number[] {
+  if (typeof window === "undefined") return [];
+  try {
+    const v = JSON.parse(window.localStorage.getItem(RECENT_KEY) ?? "[]");
+    return Array.isArray(v) ? v.filter((x) => Number.isInteger(x)).slice(0, 5) : [];
+  } catch {
+    return [];
+  }
+}
 
 export function ReviewBoard({ types, matters, initialQuery }: { types: Option[]; matters: MatterOption[]; initialQuery: QueueQuery }) {
   const [query, setQuery] = useState<QueueQuery>(initialQuery);
@@ -72,6 +88,22 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
   const [message, setMessage] = useState<{ tone: "info" | "error"; text: string } | null>(null);
   const [decision, setDecision] = useState<Decision | null>(null);
   const pickerRef = useRef<HTMLInputElement>(null);
+  const queueRef = useRef<HTMLElement>(null);
+  const [recent, setRecent] = useState<number[]>(readRecent);
+  const [bulkMatter, setBulkMatter] = useState<number | null>(null);
+  const focusQueue = useCallback(() => queueRef.current?.focus({ preventScroll: true }), []);
+  const remember = useCallback((matterId: number | undefined) => {
+    if (!matterId) return;
+    setRecent((r) => {
+      const next = [matterId, ...r.filter((x) => x !== matterId)].slice(0, 5);
+      try {
+        window.localStorage.setItem(RECENT_KEY, JSON.stringify(next));
+      } catch {
+        // storage switched off: remembered for this page only
+      }
+      return next;
+    });
+  }, []);
 
   /** A change of sort, filter or search starts again at page 1; a page change keeps the rest. */
   const update = useCallback((patch: Partial<QueueQuery>) => {
@@ -129,6 +161,7 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
             revalidate: true,
           },
         );
+        remember(payload.matterId);
         setMessage(null);
         if (box.answer) setDecision(decisionOf(item.name, item.id, box.answer, { types, matters, list }));
       } catch (e) {
@@ -136,23 +169,31 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
         setMessage({ tone: "error", text: `${item.name} was not filed: ${e instanceof ApiError ? e.message : "the server could not be reached. Try again."}` });
       }
     },
-    [items, mutate, types, matters, list],
+    [items, mutate, types, matters, list, remember],
   );
 
-  const acceptChecked = async () => {
-    const ids = [...checked];
-    if (!ids.length) return;
+  // The selection as it stands on this page: a row that left the queue leaves the count too.
+  const selection = useMemo(() => items.filter((i) => checked.has(i.id)), [items, checked]);
+  const acceptChecked = useCallback(async () => {
+    const chosen = selection;
+    if (!chosen.length) return;
+    const ids = chosen.map((i) => i.id);
     try {
-      const r = await postJson<{ accepted: number; results: { ok: boolean; documentId: number; filing?: { eventId: number }; error?: { message: string } }[] }>("/api/review/accept", { documentIds: ids });
+      const r = await postJson<{ accepted: number; results: { ok: boolean; documentId: number; filing?: { eventId: number }; error?: { message: string } }[] }>("/api/review/accept", { documentIds: ids, ...(bulkMatter ? { matterId: bulkMatter } : {}) });
       const failed = r.results.filter((x) => !x.ok);
+      const filed = new Set(r.results.filter((x) => x.ok).map((x) => x.documentId));
+      await mutate((current) => withoutItems(current, chosen.filter((i) => filed.has(i.id))), { revalidate: false });
+      const names = new Map(chosen.map((i) => [i.id, i.name]));
       setDecision(manyAcceptedDecision(r.results, ids.length));
-      setMessage(failed.length ? { tone: "error", text: `Not filed: ${failed.map((f) => `#${f.documentId} (${f.error?.message})`).join("; ")}` } : null);
-      setChecked(new Set());
+      setMessage(failed.length ? { tone: "error", text: `Not filed: ${failed.map((f) => `${names.get(f.documentId) ?? `#${f.documentId}`} (${f.error?.message})`).join("; ")}` } : null);
+      if (bulkMatter && r.accepted) remember(bulkMatter);
+      setChecked(new Set(failed.map((f) => f.documentId)));
     } catch (e) {
       setMessage({ tone: "error", text: e instanceof ApiError ? e.message : "The server could not be reached; nothing was accepted." });
     }
+    setSelectedId(null);
     await mutate();
-  };
+  }, [selection, bulkMatter, mutate, matters, remember]);
 
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
@@ -160,7 +201,9 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
       if (["INPUT", "SELECT", "TEXTAREA"].includes(target.tagName) || e.metaKey || e.ctrlKey || e.altKey) return;
       const item = selected;
       const k = e.key.toLowerCase();
-      if (k === "j" || e.key === "ArrowDown") move(1);
+      if (e.shiftKey && k === "a") void acceptChecked();
+      else if (e.shiftKey && k === "m") document.getElementById("bulk-matter")?.focus();
+      else if (k === "j" || e.key === "ArrowDown") move(1);
       else if (k === "k" || e.key === "ArrowUp") move(-1);
       else if (k === "/") pickerRef.current?.focus();
       else if (k === "m") document.getElementById("matter-select")?.focus();
@@ -176,13 +219,13 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
-  }, [selected, move, list]);
+  }, [selected, move, list, acceptChecked]);
 
   const aboveBar = items.filter((i) => i.suggestion?.confidence !== null && (i.suggestion?.confidence ?? 0) >= bar && !i.suggestion?.noConfidentMatch && i.suggestion?.matterId && !i.suggestion.matterAmbiguous);
 
   return (
     <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-      <section aria-label="Queue" className="min-w-0 space-y-3">
+      <section aria-label="Queue" ref={queueRef} tabIndex={-1} id="queue" className="min-w-0 space-y-3 outline-none">
         <div className="flex flex-wrap items-end gap-3 text-xs">
           <div role="tablist" className="flex overflow-hidden rounded border border-paper-edge">
             {(["review", "spot-check"] as const).map((l) => (
@@ -266,8 +309,24 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
               <input type="number" min={0.5} max={1} step={0.01} value={bar} onChange={(e) => setBar(Number(e.target.value))} className="w-16 rounded border border-paper-edge px-1" aria-label="Confidence bar for selecting" />
             </label>
             <Button variant="quiet" onClick={() => setChecked(new Set(aboveBar.map((i) => i.id)))}>Select {aboveBar.length}</Button>
-            <Button onClick={acceptChecked} disabled={checked.size === 0} data-testid="accept-selected">Accept {checked.size} selected</Button>
-            <span className="text-ink-faint">Only documents with a clear matter are selected; check a sample before accepting many.</span>
+            <span className="text-ink-soft">Only documents with a clear matter are selected; check a sample before accepting many.</span>
+          </div>
+        )}
+
+        {list === "review" && selection.length > 0 && (
+          <div className="grid gap-2 rounded border border-verdigris bg-verdigris-light/40 px-3 py-2 text-xs sm:grid-cols-[minmax(0,1fr)_auto] sm:items-end" data-testid="bulk-bar">
+            <MatterCombobox
+              id="bulk-matter"
+              label={`One matter for all ${selection.length} selected (Shift+M) — or leave empty to keep each one's own`}
+              matters={matters}
+              recent={recent}
+              value={bulkMatter}
+              onChange={setBulkMatter}
+              onDone={focusQueue}
+            />
+            <Button onClick={acceptChecked} data-testid="accept-selected">
+              Accept {selection.length} selected <kbd className="font-mono text-xs opacity-80">Shift+A</kbd>
+            </Button>
           </div>
         )}
 
@@ -312,7 +371,7 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
         </details>
       </section>
       <aside aria-label="Decision" className="min-w-0">
-        {selected ? <DecisionPanel key={selected.id} ref={pickerRef} item={selected} list={list} types={types} matters={matters} onDecide={decide} /> : null}
+        {selected ? <DecisionPanel key={selected.id} ref={pickerRef} item={selected} list={list} types={types} matters={matters} onDecide={decide} recent={recent} onQueueFocus={focusQueue} /> : null}
       </aside>
     </div>
   );

@@ -13,6 +13,8 @@ export const filingSchema = z.object({
 
 export const acceptManySchema = z.object({
   documentIds: z.array(z.number().int().positive()).min(1, "Pick at least one document.").max(200, "Accept at most 200 documents at once."),
+  /** One matter for all of them; without it each keeps its own suggested matter. */
+  matterId: z.number().int().positive().optional(),
 });
 
 export const undoManySchema = z.object({

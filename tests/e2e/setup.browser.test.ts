@@ -110,14 +110,17 @@ describe("Setup in a browser", () => {
     const doc = (await owner("documents").where({ original_name: fileName }).first("id")).id as number;
     await waitFor("the suggestion", async () => (await owner("suggestions").where({ document_id: doc }).count({ n: "*" }))[0].n === 1);
 
-    await clerk.goto(`${BASE_URL}/review`);
+    await clerk.goto(`${BASE_URL}/review?q=${encodeURIComponent(fileName)}`);
     const row = clerk.locator(`[data-testid="queue-row"][data-id="${doc}"]`);
     await row.waitFor({ timeout: 30_000 });
     await row.click();
     const panel = clerk.getByTestId("decision-panel");
     await expect.poll(() => panel.locator("h2").textContent()).toBe(fileName);
-    await panel.locator("#matter-select").selectOption(String(matter.id));
-    const picker = panel.locator('input[role="combobox"]');
+    const matterBox = panel.locator("#matter-select");
+    await matterBox.fill(matterNumber);
+    await clerk.locator(`[data-testid="matter-option"][data-matter-id="${matter.id}"]`).first().waitFor();
+    await matterBox.press("Enter");
+    const picker = panel.locator("#cabinet-picker");
     await picker.fill(typeName);
     await picker.press("Enter");
     await row.waitFor({ state: "detached", timeout: 15_000 });
