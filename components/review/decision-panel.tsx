@@ -1,5 +1,5 @@
 "use client";
-import { forwardRef, useState } from "react";
+import { forwardRef, useRef, useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { Confidence } from "@/components/ui/confidence";
@@ -40,7 +40,13 @@ export const DecisionPanel = forwardRef<HTMLInputElement, PanelProps>(function D
   const canAccept = list === "review" && Boolean(item.suggestion?.cabinetTypeId);
   // A decision that waits for its matter: A (or a cabinet type) with no matter yet opens the
   // matter step, and choosing the matter there files it; Escape drops it, filing nothing.
-  const [pending, setPending] = useState<FilingPayload | null>(null);
+  const [pending, setPendingState] = useState<FilingPayload | null>(null);
+  // Also in a ref: the matter step reads it the moment a matter is chosen, whatever render it is in.
+  const pendingRef = useRef<FilingPayload | null>(null);
+  const setPending = (p: FilingPayload | null) => {
+    pendingRef.current = p;
+    setPendingState(p);
+  };
   const decide = (payload: FilingPayload) => {
     const m = payload.matterId ?? chosenMatter;
     if (!m && list === "review") {
@@ -128,9 +134,10 @@ export const DecisionPanel = forwardRef<HTMLInputElement, PanelProps>(function D
         value={chosenMatter ?? null}
         onChange={(id) => {
           setPicked(id);
-          if (pending) {
+          const waiting = pendingRef.current;
+          if (waiting) {
             setPending(null);
-            onDecide(item, { ...pending, matterId: id });
+            onDecide(item, { ...waiting, matterId: id });
           }
         }}
         onDone={() => {

@@ -94,6 +94,17 @@ export function MatterCombobox({ id, label, matters, candidates = [], recent = [
   const onKeyDown = (e: React.KeyboardEvent<HTMLInputElement>) => {
     // Keys typed here are the combobox's own: none reaches the queue's shortcuts.
     e.stopPropagation();
+    if (e.key === "Enter" && (!isOpen || highlightedIndex < 0) && items.length > 0) {
+      // Enter before the list has opened (a fast typist) takes the first matter shown, as it would.
+      (e.nativeEvent as KeyboardEvent & { preventDownshiftDefault?: boolean }).preventDownshiftDefault = true;
+      e.preventDefault();
+      const first = items[0];
+      closeMenu();
+      setInputValue(itemToString(first));
+      onChange(first.matter.id);
+      onDone();
+      return;
+    }
     if (e.key === "Escape") {
       // Our Escape, not downshift's (which clears the choice when the list is closed).
       (e.nativeEvent as KeyboardEvent & { preventDownshiftDefault?: boolean }).preventDownshiftDefault = true;

@@ -166,6 +166,7 @@ describe("To review by keyboard, keys counted", () => {
       await expect.poll(() => page.locator('#cabinet-picker-list [aria-selected="true"]').textContent()).toBe(d.want);
       await keys.press("Enter"); // the type; the matter step opens with the found matters first
       await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe("matter-select");
+      await expect.poll(() => page.getByTestId("matter-option").first().getAttribute("data-matter-id")).toBe(String(m.get("AQ-2026-0123")));
       await keys.press("Enter"); // the first found matter
       const row = await filedAs(d.id);
       expect(row).toEqual({ filed_how: "refiled", cabinet_type_id: types.get(d.want), matter_id: m.get("AQ-2026-0123") });
