@@ -8,9 +8,9 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: "#F6F3EC", deep: "#ECE7DB", edge: "#D9D2C3" },
-        ink: { DEFAULT: "#1F2430", soft: "#4A5060", faint: "#7A7F8C" },
+        ink: { DEFAULT: "#1F2430", soft: "#4A5060", faint: "#5E6372" }, // faint: 5.4:1 on paper (WCAG AA 4.5:1)
         verdigris: { DEFAULT: "#2E6B5E", dark: "#22524A", light: "#D7E6E1" },
-        amber: { DEFAULT: "#A86B12", dark: "#7A4C08", light: "#F3E3C6" },
+        amber: { DEFAULT: "#855309", dark: "#7A4C08", light: "#F3E3C6" }, // text: 5.1:1 on amber-light
         brick: { DEFAULT: "#9A3324", light: "#F2D9D4" },
       },
       fontFamily: {

@@ -125,6 +125,8 @@ export function MatterCombobox({ id, label, matters, candidates = [], recent = [
       <input
         {...getInputProps({
           onKeyDown,
+          // The typed value is kept at once (not after downshift's own state change), so no fast key is lost.
+          onChange: (e) => setInputValue(e.currentTarget.value),
           onFocus: (e) => {
             e.currentTarget.select();
             if (!isOpen) openMenu();

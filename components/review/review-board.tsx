@@ -224,7 +224,7 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
   const aboveBar = items.filter((i) => i.suggestion?.confidence !== null && (i.suggestion?.confidence ?? 0) >= bar && !i.suggestion?.noConfidentMatch && i.suggestion?.matterId && !i.suggestion.matterAmbiguous);
 
   return (
-    <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
       <section aria-label="Queue" ref={queueRef} tabIndex={-1} id="queue" className="min-w-0 space-y-3 outline-none">
         <div className="flex flex-wrap items-end gap-3 text-xs">
           <div role="tablist" className="flex overflow-hidden rounded border border-paper-edge">
@@ -370,7 +370,7 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
           </dl>
         </details>
       </section>
-      <aside aria-label="Decision" className="min-w-0">
+      <aside aria-label="Decision" className="min-w-0 lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
         {selected ? <DecisionPanel key={selected.id} ref={pickerRef} item={selected} list={list} types={types} matters={matters} onDecide={decide} recent={recent} onQueueFocus={focusQueue} /> : null}
       </aside>
     </div>
