@@ -193,7 +193,7 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
     }
     setSelectedId(null);
     await mutate();
-  }, [selection, bulkMatter, mutate, matters, remember]);
+  }, [selection, bulkMatter, mutate, remember]);
 
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
