@@ -90,7 +90,13 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
   const pickerRef = useRef<HTMLInputElement>(null);
   const queueRef = useRef<HTMLElement>(null);
   const [recent, setRecent] = useState<number[]>(readRecent);
-  const [bulkMatter, setBulkMatter] = useState<number | null>(null);
+  const [bulkMatter, setBulkMatterState] = useState<number | null>(null);
+  // Also in a ref: Shift+A right after choosing the matter must already send it.
+  const bulkMatterRef = useRef<number | null>(null);
+  const setBulkMatter = useCallback((id: number | null) => {
+    bulkMatterRef.current = id;
+    setBulkMatterState(id);
+  }, []);
   const focusQueue = useCallback(() => queueRef.current?.focus({ preventScroll: true }), []);
   const remember = useCallback((matterId: number | undefined) => {
     if (!matterId) return;
@@ -178,6 +184,7 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
     const chosen = selection;
     if (!chosen.length) return;
     const ids = chosen.map((i) => i.id);
+    const bulkMatter = bulkMatterRef.current;
     try {
       const r = await postJson<{ accepted: number; results: { ok: boolean; documentId: number; filing?: { eventId: number }; error?: { message: string } }[] }>("/api/review/accept", { documentIds: ids, ...(bulkMatter ? { matterId: bulkMatter } : {}) });
       const failed = r.results.filter((x) => !x.ok);
@@ -193,7 +200,7 @@ export function ReviewBoard({ types, matters, initialQuery }: { types: Option[];
     }
     setSelectedId(null);
     await mutate();
-  }, [selection, bulkMatter, mutate, remember]);
+  }, [selection, mutate, remember]);
 
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
