@@ -103,14 +103,15 @@ export async function linkDocumentToMatters(db: Knex | Knex.Transaction, documen
   if (rows.length) await db("document_matter_links").insert(rows).onConflict(["document_id", "matter_id"]).ignore();
 }
 
-export async function appendFilingEvent(db: Knex | Knex.Transaction, e: NewFilingEvent): Promise<number> {
+/** The matters an event links its document to, and the row it writes: one shape for one and many. */
+function eventLinks(e: NewFilingEvent): { matterId: number; how: LinkHow }[] {
   if (!FILING_ACTIONS.includes(e.action)) throw new Error(`Unknown filing action "${e.action}".`);
   const how = LINK_OF[e.action] ?? "filed";
-  await linkDocumentToMatters(db, e.documentId, [
-    ...(e.fromMatterId ? [{ matterId: e.fromMatterId, how }] : []),
-    ...(e.toMatterId ? [{ matterId: e.toMatterId, how }] : []),
-  ]);
-  const [id] = await db("filing_events").insert({
+  return [e.fromMatterId, e.toMatterId].filter((m): m is number => !!m).map((matterId) => ({ matterId, how }));
+}
+
+function eventRow(e: NewFilingEvent) {
+  return {
     document_id: e.documentId,
     user_id: e.userId,
     action: e.action,
@@ -124,36 +125,26 @@ export async function appendFilingEvent(db: Knex | Knex.Transaction, e: NewFilin
     reverses_event_id: e.reversesEventId ?? null,
     prior_filing: e.priorFiling ? JSON.stringify(e.priorFiling) : null,
     ...(e.createdAt ? { created_at: e.createdAt } : {}),
-  });
+  };
+}
+
+export async function appendFilingEvent(db: Knex | Knex.Transaction, e: NewFilingEvent): Promise<number> {
+  await linkDocumentToMatters(db, e.documentId, eventLinks(e));
+  const [id] = await db("filing_events").insert(eventRow(e));
   return Number(id);
 }
 
 /**
  * Many events at once (bulk writers such as the scale benchmark's filing of generated documents):
- * the same checks and links as appendFilingEvent, in two multi-row inserts.
+ * the same checks, links and rows as appendFilingEvent, in two multi-row inserts.
  */
 export async function appendFilingEvents(db: Knex | Knex.Transaction, events: NewFilingEvent[]): Promise<void> {
   if (events.length === 0) return;
-  const links: { document_id: number; matter_id: number; how: LinkHow }[] = [];
-  for (const e of events) {
-    if (!FILING_ACTIONS.includes(e.action)) throw new Error(`Unknown filing action "${e.action}".`);
-    const how = LINK_OF[e.action] ?? "filed";
-    for (const m of [e.fromMatterId, e.toMatterId]) if (m && Number.isInteger(m) && m > 0) links.push({ document_id: e.documentId, matter_id: m, how });
-  }
-  if (links.length) await db("document_matter_links").insert(links).onConflict(["document_id", "matter_id"]).ignore();
-  await db("filing_events").insert(
-    events.map((e) => ({
-      document_id: e.documentId,
-      user_id: e.userId,
-      action: e.action,
-      from_cabinet_type_id: e.fromCabinetTypeId ?? null,
-      to_cabinet_type_id: e.toCabinetTypeId ?? null,
-      from_matter_id: e.fromMatterId ?? null,
-      to_matter_id: e.toMatterId ?? null,
-      model_version_id: e.modelVersionId ?? null,
-      confidence: e.confidence ?? null,
-      reason: e.reason ? e.reason.slice(0, REASON_MAX) : null,
-      ...(e.createdAt ? { created_at: e.createdAt } : {}),
-    })),
+  const links = events.flatMap((e) =>
+    eventLinks(e)
+      .filter((l) => Number.isInteger(l.matterId) && l.matterId > 0)
+      .map((l) => ({ document_id: e.documentId, matter_id: l.matterId, how: l.how })),
   );
+  if (links.length) await db("document_matter_links").insert(links).onConflict(["document_id", "matter_id"]).ignore();
+  await db("filing_events").insert(events.map(eventRow));
 }
