@@ -2,7 +2,8 @@
 // (no sandbox as root, no GPU, no background networking on a closed network). Playwright gives
 // each launch a fresh, empty profile directory of its own.
 import fs from "node:fs";
-import { chromium, type Browser } from "playwright-core";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { BASE_URL, DEMO_PASSWORD } from "./http";
 
 export async function launchBrowser(): Promise<Browser> {
   const executablePath = ["/usr/bin/chromium", "/usr/bin/chromium-browser"].find((p) => fs.existsSync(p));
@@ -20,4 +21,13 @@ export async function launchBrowser(): Promise<Browser> {
       "--disable-sync",
     ],
   });
+}
+
+/** Signs a demo account in through the sign-in form and waits until it has left it. */
+export async function signIn(page: Page, email: string) {
+  await page.goto(`${BASE_URL}/sign-in`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
 }

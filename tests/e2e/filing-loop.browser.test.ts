@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser } from "./browser";
-import { BASE_URL, Client, DEMO_PASSWORD } from "./http";
+import type { Browser } from "playwright-core";
+import { launchBrowser, signIn } from "./browser";
+import { BASE_URL, Client } from "./http";
 import { makeTextPdf } from "../helpers/make-files";
 import { ownerDb } from "../helpers/db";
 import { insertFiledDocuments } from "../helpers/filed-documents";
@@ -28,14 +28,6 @@ async function trainThroughApi(): Promise<number> {
   const v = await waitFor("the new version to finish", async () => (await models()).versions.find((x) => x.id === id && !["training", "candidate"].includes(x.status)));
   expect(v).toMatchObject({ status: "current" });
   return id;
-}
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${BASE_URL}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
 }
 
 beforeAll(async () => {

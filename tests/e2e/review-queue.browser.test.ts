@@ -1,8 +1,8 @@
 import crypto from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser } from "./browser";
-import { BASE_URL, DEMO_PASSWORD } from "./http";
+import type { Browser } from "playwright-core";
+import { launchBrowser, signIn } from "./browser";
+import { BASE_URL } from "./http";
 import { ownerDb } from "../helpers/db";
 import { insertQueueDocument } from "../helpers/queue-documents";
 
@@ -14,14 +14,6 @@ let browser: Browser;
 const run = crypto.randomBytes(3).toString("hex");
 const marker = `q${run}`;
 const ids: number[] = [];
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${BASE_URL}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-}
 
 beforeAll(async () => {
   // 130 invoices and 3 payroll records, the last uploaded a minute after the rest.

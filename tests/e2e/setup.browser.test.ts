@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser } from "./browser";
-import { BASE_URL, Client, DEMO_PASSWORD } from "./http";
+import type { Browser } from "playwright-core";
+import { launchBrowser, signIn } from "./browser";
+import { BASE_URL, Client } from "./http";
 import { makeTextPdf } from "../helpers/make-files";
 import { ownerDb } from "../helpers/db";
 import { waitUntil as pollUntil } from "../helpers/wait";
@@ -15,14 +15,6 @@ const stamp = `${Date.now()}`;
 const typeName = `Vessel surveys ${stamp}`;
 const clientName = `Heron Boatworks ${stamp}`;
 const matterNumber = `HB-${stamp}`;
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${BASE_URL}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-}
 
 const waitFor = <T,>(what: string, probe: () => Promise<T | undefined | false | null>, ms = 120_000) => pollUntil(what, probe, ms, 500);
 

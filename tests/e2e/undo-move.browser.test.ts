@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser } from "./browser";
-import { BASE_URL, DEMO_PASSWORD } from "./http";
+import type { Browser } from "playwright-core";
+import { launchBrowser, signIn } from "./browser";
+import { BASE_URL } from "./http";
 import { ownerDb } from "../helpers/db";
 import { demoUser } from "../helpers/users";
 import { insertUnfiledDocument, typeIds } from "../helpers/filed-documents";
@@ -18,14 +18,6 @@ let types: Map<string, number>;
 let matterId: number;
 let otherMatter: { id: number; number: string };
 const SHOTS = "/tmp/foldwright-ux-record"; // screenshots looked at by hand, not compared
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${BASE_URL}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-}
 
 beforeAll(async () => {
   types = await typeIds(owner);

@@ -1,8 +1,8 @@
 import { createRequire } from "node:module";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser } from "./browser";
-import { BASE_URL, DEMO_PASSWORD } from "./http";
+import type { Browser } from "playwright-core";
+import { launchBrowser, signIn } from "./browser";
+import { BASE_URL } from "./http";
 import { listRoutesAndPages } from "./app-files";
 import { ownerDb } from "../helpers/db";
 import { insertQueueDocument } from "../helpers/queue-documents";
@@ -18,14 +18,6 @@ const owner = ownerDb();
 let browser: Browser;
 let documentId = 0;
 let batchId: number | null = null;
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${BASE_URL}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-}
 
 /** The address of a page file under app/ ("(app)/documents/[id]/page.tsx" → "/documents/12"). */
 function addressOf(file: string): string | null {
